@@ -1,0 +1,36 @@
+// ESLint flat config. It lives in scripts/ to keep the top level small; basePath points it at the repo.
+import { defineConfig, globalIgnores } from "eslint/config";
+import nextVitals from "eslint-config-next/core-web-vitals";
+import nextTs from "eslint-config-next/typescript";
+
+export default defineConfig([
+  { basePath: ".." },
+  ...nextVitals,
+  ...nextTs,
+  globalIgnores(["node_modules/**", ".next/**", ".data/**", "next-env.d.ts", "drizzle/**"]),
+  {
+    // The engine is framework-free: nothing of the app, React, Next, the database or zod.
+    files: ["src/engine/**/*.ts"],
+    rules: {
+      "no-restricted-imports": ["error", { patterns: [
+        { group: ["react", "react-*", "next", "next/*", "zod", "drizzle-orm", "drizzle-orm/*", "pg", "@/server/*", "@/app/*", "@/editor/*", "@/components/*", "@/lib/*", "@/contracts/*"], message: "src/engine imports only itself." },
+      ] }],
+    },
+  },
+  {
+    files: ["src/contracts/**/*.ts"],
+    rules: {
+      "no-restricted-imports": ["error", { patterns: [
+        { group: ["react", "next", "next/*", "@/server/*", "@/app/*", "@/editor/*", "@/components/*", "server-only"], message: "src/contracts may import only the engine and zod." },
+      ] }],
+    },
+  },
+  {
+    files: ["src/editor/**/*.{ts,tsx}", "src/components/**/*.{ts,tsx}", "src/lib/**/*.{ts,tsx}"],
+    rules: {
+      "no-restricted-imports": ["error", { patterns: [
+        { group: ["@/server/*", "@/app/*"], message: "Client code never imports the server or app." },
+      ] }],
+    },
+  },
+]);

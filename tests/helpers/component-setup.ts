@@ -1,0 +1,5 @@
+import "vitest-canvas-mock";
+import { cleanup } from "@testing-library/react";
+import { afterEach } from "vitest";
+
+afterEach(() => cleanup());

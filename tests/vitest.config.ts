@@ -1,0 +1,40 @@
+import { fileURLToPath } from "node:url";
+import { defineConfig } from "vitest/config";
+
+const root = fileURLToPath(new URL("..", import.meta.url));
+const alias = { "@": `${root}src`, "server-only": `${root}tests/helpers/server-only-stub.ts` };
+
+// Three projects: pure logic (node), components (jsdom + canvas mock), and integration tests that need
+// the throwaway PostgreSQL started by scripts/test.sh (DATABASE_URL set).
+export default defineConfig({
+  root,
+  resolve: { alias },
+  test: {
+    projects: [
+      {
+        resolve: { alias },
+        test: { name: "unit", environment: "node", include: ["tests/engine/**/*.test.ts", "tests/contracts/**/*.test.ts", "tests/lib/**/*.test.ts"] },
+      },
+      {
+        resolve: { alias },
+        test: {
+          name: "component",
+          environment: "jsdom",
+          include: ["tests/editor/**/*.test.{ts,tsx}", "tests/components/**/*.test.{ts,tsx}"],
+          setupFiles: ["tests/helpers/component-setup.ts"],
+        },
+      },
+      {
+        resolve: { alias },
+        test: {
+          name: "integration",
+          environment: "node",
+          include: ["tests/api/**/*.test.ts", "tests/server/**/*.test.ts"],
+          fileParallelism: false,
+          testTimeout: 30_000,
+          hookTimeout: 60_000,
+        },
+      },
+    ],
+  },
+});
