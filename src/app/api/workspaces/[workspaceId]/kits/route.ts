@@ -1,0 +1,23 @@
+import { z } from "zod";
+import { kitCreateFields } from "@/contracts/kits";
+import { createKit, listKits } from "@/server/data/kits";
+import { incomingLayout, starterLayout } from "@/server/data/layouts";
+import { readJson } from "@/server/http/body";
+import { workspaceRoute } from "@/server/http/route";
+
+type Params = { workspaceId: string };
+
+export const GET = workspaceRoute<Params, "kit">("kit", "read", async (_req, access) => {
+  return Response.json({ kits: await listKits(access.workspace.id) });
+});
+
+const createBody = kitCreateFields.extend({ layout: incomingLayout.optional() }).strict();
+
+export const POST = workspaceRoute<Params, "kit">("kit", "create", async (req, access) => {
+  const body = await readJson(req, createBody);
+  const { layout, ...fields } = body;
+  const kit = await createKit(access.workspace.id, access.user.id, fields, layout ?? starterLayout());
+  return Response.json({ kit }, { status: 201, headers: { location: `/api/workspaces/${access.workspace.id}/kits/${kit.id}` } });
+});
+
+export type CreateKitBody = z.input<typeof createBody>;

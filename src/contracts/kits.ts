@@ -1,0 +1,37 @@
+import { z } from "zod";
+
+// Bodies of the kits API. The layout document itself is validated by ./layout (schema-versioned).
+
+export const KIT_SCALES = ["1:5", "1:6", "1:8", "1:10", "1:12", "1:16", "1:18", "1:24", "other"] as const;
+
+const kitName = z
+  .string({ error: "Name must be text" })
+  .trim()
+  .min(1, "Name is required")
+  .max(120, "Name must be at most 120 characters");
+const kitScale = z.enum(KIT_SCALES, { error: `Scale must be one of ${KIT_SCALES.join(", ")}` });
+const kitNotes = z.string({ error: "Notes must be text" }).max(4000, "Notes must be at most 4000 characters");
+const version = z
+  .number({ error: "Version must be a number: the version your edit is based on" })
+  .int("Version must be a whole number")
+  .min(1, "Version starts at 1");
+
+export const kitCreateFields = z.object({
+  name: kitName,
+  scale: kitScale,
+  notes: kitNotes.optional(),
+});
+export type KitCreateFields = z.infer<typeof kitCreateFields>;
+
+export const kitPatchBody = z
+  .object({ version, name: kitName.optional(), scale: kitScale.optional(), notes: kitNotes.optional() })
+  .strict()
+  .refine((b) => b.name !== undefined || b.scale !== undefined || b.notes !== undefined, {
+    message: "Send at least one of name, scale or notes",
+    path: ["name"],
+  });
+export type KitPatchBody = z.infer<typeof kitPatchBody>;
+
+export const kitIdParam = z.string().uuid("Kit id must be a UUID");
+
+export { version as versionField };

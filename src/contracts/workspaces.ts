@@ -1,0 +1,18 @@
+import { z } from "zod";
+import { WORKSPACE_ROLES } from "./roles";
+
+const role = z.enum(WORKSPACE_ROLES, { error: `Role must be one of ${WORKSPACE_ROLES.join(", ")}` });
+
+export const memberAddBody = z
+  .object({
+    email: z.string({ error: "E-mail is required" }).trim().toLowerCase().email("Enter a valid e-mail address").max(254),
+    role,
+  })
+  .strict();
+export type MemberAddBody = z.infer<typeof memberAddBody>;
+
+export const memberRoleBody = z.object({ role }).strict();
+
+export const workspaceCreateBody = z
+  .object({ name: z.string({ error: "Name is required" }).trim().min(1, "Name is required").max(80, "Name must be at most 80 characters") })
+  .strict();

@@ -1,0 +1,82 @@
+import "server-only";
+import { betterAuth } from "better-auth";
+import { drizzleAdapter } from "better-auth/adapters/drizzle";
+import { organization } from "better-auth/plugins/organization";
+import { db } from "../db/client";
+import * as schema from "../db/schema";
+import { authSecret, env } from "../env";
+import { firstWorkspaceIdOf, createPersonalWorkspace } from "../data/workspaces";
+import { ac, roles } from "./access";
+
+function trustedOrigins(): string[] {
+  const base = new URL(env.BETTER_AUTH_URL);
+  const origins = new Set([base.origin]);
+  // The same server is reached as localhost or 127.0.0.1 depending on who types the address.
+  if (base.hostname === "127.0.0.1") origins.add(base.origin.replace("127.0.0.1", "localhost"));
+  if (base.hostname === "localhost") origins.add(base.origin.replace("localhost", "127.0.0.1"));
+  for (const o of env.KB_TRUSTED_ORIGINS.split(",").map((s) => s.trim()).filter(Boolean)) origins.add(o);
+  return [...origins];
+}
+
+export const auth = betterAuth({
+  appName: "Knucklebench",
+  baseURL: env.BETTER_AUTH_URL,
+  secret: authSecret(),
+  trustedOrigins: trustedOrigins(),
+  database: drizzleAdapter(db, {
+    provider: "pg",
+    schema: {
+      user: schema.users,
+      session: schema.sessions,
+      account: schema.accounts,
+      verification: schema.verifications,
+      rateLimit: schema.rateLimits,
+      organization: schema.workspaces,
+      member: schema.members,
+      invitation: schema.invitations,
+    },
+  }),
+  emailAndPassword: { enabled: true, minPasswordLength: 8, maxPasswordLength: 128, autoSignIn: true },
+  session: { expiresIn: 60 * 60 * 24 * 14, updateAge: 60 * 60 * 24 },
+  rateLimit: {
+    // On in production by default; KB_AUTH_RATE_LIMIT forces it either way (tests switch it on).
+    enabled: env.KB_AUTH_RATE_LIMIT ? env.KB_AUTH_RATE_LIMIT === "on" : env.NODE_ENV === "production",
+    storage: "database",
+    window: 60,
+    max: 100,
+    customRules: {
+      "/sign-in/email": { window: 60, max: 10 },
+      "/sign-up/email": { window: 60, max: 10 },
+    },
+  },
+  plugins: [
+    organization({
+      ac,
+      roles,
+      creatorRole: "owner",
+      allowUserToCreateOrganization: true,
+      membershipLimit: 200,
+    }),
+  ],
+  databaseHooks: {
+    user: {
+      create: {
+        // Every new designer starts with a workspace of their own.
+        after: async (user) => {
+          await createPersonalWorkspace({ id: user.id, name: user.name });
+        },
+      },
+    },
+    session: {
+      create: {
+        before: async (session) => {
+          const active = (session as { activeOrganizationId?: string | null }).activeOrganizationId;
+          if (active) return { data: session };
+          return { data: { ...session, activeOrganizationId: await firstWorkspaceIdOf(session.userId) } };
+        },
+      },
+    },
+  },
+});
+
+export type AuthSession = typeof auth.$Infer.Session;

@@ -1,0 +1,125 @@
+import "server-only";
+import { randomUUID } from "node:crypto";
+import { and, asc, eq, sql } from "drizzle-orm";
+import type { WorkspaceRole } from "@/contracts/roles";
+import { db } from "../db/client";
+import { members, sessions, users, workspaces } from "../db/schema";
+import { HttpError } from "../http/errors";
+
+export type WorkspaceSummary = { id: string; name: string; slug: string; role: string };
+export type MemberRow = { id: string; userId: string; name: string; email: string; role: string; createdAt: string };
+
+function slugFrom(name: string): string {
+  const base = name.toLowerCase().normalize("NFKD").replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "").slice(0, 40) || "workspace";
+  return `${base}-${randomUUID().slice(0, 8)}`;
+}
+
+export async function createWorkspace(input: { name: string; ownerId: string; slug?: string }): Promise<WorkspaceSummary> {
+  const id = randomUUID();
+  const slug = input.slug ?? slugFrom(input.name);
+  await db.transaction(async (tx) => {
+    await tx.insert(workspaces).values({ id, name: input.name, slug });
+    await tx.insert(members).values({ id: randomUUID(), organizationId: id, userId: input.ownerId, role: "owner" });
+  });
+  return { id, name: input.name, slug, role: "owner" };
+}
+
+export function createPersonalWorkspace(user: { id: string; name: string }): Promise<WorkspaceSummary> {
+  const first = user.name.trim().split(/\s+/)[0] || "My";
+  return createWorkspace({ name: `${first}'s workspace`, ownerId: user.id });
+}
+
+export async function firstWorkspaceIdOf(userId: string): Promise<string | null> {
+  const [row] = await db
+    .select({ id: members.organizationId })
+    .from(members)
+    .where(eq(members.userId, userId))
+    .orderBy(asc(members.createdAt))
+    .limit(1);
+  return row?.id ?? null;
+}
+
+export async function listWorkspacesOf(userId: string): Promise<WorkspaceSummary[]> {
+  return db
+    .select({ id: workspaces.id, name: workspaces.name, slug: workspaces.slug, role: members.role })
+    .from(members)
+    .innerJoin(workspaces, eq(workspaces.id, members.organizationId))
+    .where(eq(members.userId, userId))
+    .orderBy(asc(members.createdAt));
+}
+
+export async function listMembers(workspaceId: string): Promise<MemberRow[]> {
+  const rows = await db
+    .select({ id: members.id, userId: users.id, name: users.name, email: users.email, role: members.role, createdAt: members.createdAt })
+    .from(members)
+    .innerJoin(users, eq(users.id, members.userId))
+    .where(eq(members.organizationId, workspaceId))
+    .orderBy(asc(members.createdAt));
+  return rows.map((r) => ({ ...r, createdAt: r.createdAt.toISOString() }));
+}
+
+async function ownerCount(workspaceId: string): Promise<number> {
+  const [row] = await db
+    .select({ n: sql<number>`count(*)::int` })
+    .from(members)
+    .where(and(eq(members.organizationId, workspaceId), eq(members.role, "owner")));
+  return row?.n ?? 0;
+}
+
+function assertMayGrant(actorRole: string, role: WorkspaceRole) {
+  if (role === "owner" && actorRole !== "owner") {
+    throw new HttpError(403, "forbidden", "Only an owner may make someone an owner.", [{ path: "role", message: "Only an owner may grant owner" }]);
+  }
+}
+
+/** Adds an existing user (by e-mail) to the workspace. Invitations by e-mail are a separate flow. */
+export async function addMemberByEmail(workspaceId: string, actorRole: string, email: string, role: WorkspaceRole): Promise<MemberRow> {
+  assertMayGrant(actorRole, role);
+  const [user] = await db.select({ id: users.id }).from(users).where(eq(users.email, email.toLowerCase())).limit(1);
+  if (!user) {
+    throw new HttpError(404, "no_such_user", `No one has signed up with ${email} yet.`, [{ path: "email", message: "No account uses this e-mail address" }]);
+  }
+  const inserted = await db
+    .insert(members)
+    .values({ id: randomUUID(), organizationId: workspaceId, userId: user.id, role })
+    .onConflictDoNothing()
+    .returning({ id: members.id });
+  if (inserted.length === 0) {
+    throw new HttpError(409, "already_member", `${email} is already a member of this workspace.`, [{ path: "email", message: "Already a member" }]);
+  }
+  const rows = await listMembers(workspaceId);
+  return rows.find((r) => r.id === inserted[0]!.id)!;
+}
+
+async function memberOf(workspaceId: string, memberId: string) {
+  const [row] = await db
+    .select({ id: members.id, role: members.role, userId: members.userId })
+    .from(members)
+    .where(and(eq(members.organizationId, workspaceId), eq(members.id, memberId)))
+    .limit(1);
+  if (!row) throw new HttpError(404, "not_found", "That member was not found in this workspace.");
+  return row;
+}
+
+export async function changeMemberRole(workspaceId: string, actorRole: string, memberId: string, role: WorkspaceRole): Promise<void> {
+  const target = await memberOf(workspaceId, memberId);
+  assertMayGrant(actorRole, role);
+  if (target.role === "owner" && actorRole !== "owner") throw new HttpError(403, "forbidden", "Only an owner may change an owner's role.");
+  if (target.role === "owner" && role !== "owner" && (await ownerCount(workspaceId)) <= 1) {
+    throw new HttpError(409, "last_owner", "A workspace needs at least one owner; name another owner first.");
+  }
+  await db.update(members).set({ role }).where(eq(members.id, memberId));
+}
+
+export async function removeMember(workspaceId: string, actorRole: string, memberId: string): Promise<void> {
+  const target = await memberOf(workspaceId, memberId);
+  if (target.role === "owner" && actorRole !== "owner") throw new HttpError(403, "forbidden", "Only an owner may remove an owner.");
+  if (target.role === "owner" && (await ownerCount(workspaceId)) <= 1) {
+    throw new HttpError(409, "last_owner", "A workspace needs at least one owner; name another owner first.");
+  }
+  await db.delete(members).where(eq(members.id, memberId));
+}
+
+export async function setActiveWorkspace(sessionId: string, workspaceId: string): Promise<void> {
+  await db.update(sessions).set({ activeOrganizationId: workspaceId }).where(eq(sessions.id, sessionId));
+}

@@ -1,0 +1,40 @@
+import "server-only";
+import { z } from "zod";
+
+// One place that reads process.env; every variable is documented in the README.
+const envSchema = z.object({
+  NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
+  DATABASE_URL: z.string().url().default("postgres://knucklebench@127.0.0.1:54329/knucklebench"),
+  // auto: the Neon driver for *.neon.tech hosts, node-postgres otherwise.
+  DB_DRIVER: z.enum(["auto", "pg", "neon"]).default("auto"),
+  DB_POOL_MAX: z.coerce.number().int().min(1).max(100).default(10),
+  BETTER_AUTH_SECRET: z.string().min(16).optional(),
+  BETTER_AUTH_URL: z.string().url().default("http://127.0.0.1:3000"),
+  // Comma-separated extra origins allowed to POST to the auth routes.
+  KB_TRUSTED_ORIGINS: z.string().default(""),
+  KB_AUTH_RATE_LIMIT: z.enum(["on", "off"]).optional(),
+  KB_MAX_BODY_BYTES: z.coerce.number().int().min(1024).max(10_000_000).default(262_144),
+});
+
+export type Env = z.infer<typeof envSchema>;
+
+function readEnv(): Env {
+  const parsed = envSchema.safeParse(process.env);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((i) => `  ${i.path.join(".")}: ${i.message}`).join("\n");
+    throw new Error(`Invalid environment:\n${lines}`);
+  }
+  return parsed.data;
+}
+
+export const env = readEnv();
+
+const DEV_SECRET = "knucklebench-development-secret-not-for-production";
+
+export function authSecret(): string {
+  if (env.BETTER_AUTH_SECRET) return env.BETTER_AUTH_SECRET;
+  if (env.NODE_ENV === "production" && process.env.NEXT_PHASE !== "phase-production-build") {
+    throw new Error("BETTER_AUTH_SECRET must be set (at least 16 characters) when NODE_ENV=production");
+  }
+  return DEV_SECRET;
+}

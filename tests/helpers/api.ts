@@ -1,0 +1,61 @@
+// Calls the real route handlers with a Request, as Next would, against the test database.
+import { randomUUID } from "node:crypto";
+import { POST as authPost } from "@/app/api/auth/[...all]/route";
+
+export const BASE = process.env.BETTER_AUTH_URL ?? "http://127.0.0.1:3000";
+
+type Handler<P> = (req: Request, ctx: { params: Promise<P> }) => Promise<Response>;
+
+export type CallOptions = { cookie?: string; body?: unknown; rawBody?: string; headers?: Record<string, string> };
+
+export async function call<P>(handler: Handler<P>, method: string, path: string, params: P, opts: CallOptions = {}) {
+  const headers: Record<string, string> = { ...opts.headers };
+  if (opts.cookie) headers.cookie = opts.cookie;
+  let body: string | undefined;
+  if (opts.rawBody !== undefined) body = opts.rawBody;
+  else if (opts.body !== undefined) body = JSON.stringify(opts.body);
+  if (body !== undefined && !headers["content-type"]) headers["content-type"] = "application/json";
+  const res = await handler(new Request(`${BASE}${path}`, { method, headers, body }), { params: Promise.resolve(params) });
+  const text = await res.text();
+  let json: unknown = null;
+  try {
+    json = text ? JSON.parse(text) : null;
+  } catch {
+    json = text;
+  }
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any
+  return { status: res.status, json: json as any, headers: res.headers };
+}
+
+function cookieFrom(res: Response): string {
+  const set = res.headers.getSetCookie();
+  return set.map((c) => c.split(";")[0]).join("; ");
+}
+
+export function uniqueEmail(tag: string): string {
+  return `${tag}-${randomUUID().slice(0, 8)}@test.example`;
+}
+
+/** Signs up through better-auth's own handler and returns the session cookie. */
+export async function signUp(name: string, email = uniqueEmail(name.toLowerCase().replace(/\W+/g, "")), password = "correct-horse-9") {
+  const res = await authPost(
+    new Request(`${BASE}/api/auth/sign-up/email`, {
+      method: "POST",
+      headers: { "content-type": "application/json", origin: new URL(BASE).origin },
+      body: JSON.stringify({ name, email, password }),
+    }),
+  );
+  if (res.status !== 200) throw new Error(`sign-up failed: ${res.status} ${await res.text()}`);
+  const data = (await res.json()) as { user: { id: string } };
+  return { cookie: cookieFrom(res), userId: data.user.id, email, password };
+}
+
+export async function signIn(email: string, password: string, headers: Record<string, string> = {}) {
+  return authPost(
+    new Request(`${BASE}/api/auth/sign-in/email`, {
+      method: "POST",
+      headers: { "content-type": "application/json", origin: new URL(BASE).origin, ...headers },
+      body: JSON.stringify({ email, password }),
+    }),
+  );
+}
