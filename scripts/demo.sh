@@ -1,0 +1,68 @@
+#!/usr/bin/env bash
+# `npm run demo`: the production app with the demo data on http://127.0.0.1:3000.
+# Installs the dependencies if needed, starts PostgreSQL (data kept in .data/pg across runs),
+# migrates, seeds, builds, serves, and prints how to sign in. Ctrl-C (or SIGTERM) stops the app
+# and the database. DATABASE_URL, when set, points the demo at that database instead.
+set -euo pipefail
+
+# shellcheck source=scripts/lib/common.sh
+source "$(dirname "$0")/lib/common.sh"
+# shellcheck source=scripts/lib/env.sh
+source "$KB_ROOT/scripts/lib/env.sh"
+# shellcheck source=scripts/lib/pg.sh
+source "$KB_ROOT/scripts/lib/pg.sh"
+# shellcheck source=scripts/lib/app.sh
+source "$KB_ROOT/scripts/lib/app.sh"
+cd "$KB_ROOT"
+
+APP_PORT=3000
+PG_PORT=54329
+
+# shellcheck disable=SC2317 # both run from traps
+cleanup() {
+  kb_app_stop
+  kb_pg_stop
+}
+# shellcheck disable=SC2317
+on_signal() {
+  trap - INT TERM
+  printf '\n'
+  exit 0
+}
+trap cleanup EXIT
+trap on_signal INT TERM
+
+# Fail before touching anything when another program (another demo?) already serves the port.
+if kb_port_busy "$APP_PORT"; then
+  kb_die "port $APP_PORT on 127.0.0.1 is already in use (another demo running?)"
+fi
+
+kb_ensure_node_modules
+kb_env_demo "$APP_PORT"
+kb_pg_start pg "$PG_PORT" keep
+
+kb_say "applying migrations"
+npx --no-install tsx scripts/migrate.ts
+kb_say "seeding the demo data"
+SEED_OUTPUT=$(npx --no-install tsx scripts/seed.ts) || {
+  printf '%s\n' "$SEED_OUTPUT"
+  kb_die "seeding failed"
+}
+
+kb_next_build || kb_die "the build failed (see above)"
+kb_app_start "$APP_PORT" || kb_die "the app did not start (see above)"
+
+cat <<EOF
+
+  Knucklebench is running: open http://127.0.0.1:$APP_PORT and sign in.
+$(printf '%s\n' "$SEED_OUTPUT" | sed 's/^/  /')
+
+  Press Ctrl-C to stop the app and the database (the data is kept for the next run).
+
+EOF
+
+# Serve until the app exits or a signal arrives (the trap then stops both).
+APP_EXIT=0
+wait "$KB_APP_PID" || APP_EXIT=$?
+kb_warn "the app exited (code $APP_EXIT)"
+exit "$APP_EXIT"

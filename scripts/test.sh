@@ -1,0 +1,113 @@
+#!/usr/bin/env bash
+# `npm test`: every test, on a fresh machine, with nothing left running afterwards.
+# Installs what is missing, starts a throwaway PostgreSQL, migrates, runs vitest (unit, component,
+# integration), builds and starts the app, runs the browser tests, stops everything, and ends with
+# the line `N passed, N failed` (CI reads that line) and a non-zero exit on any failure.
+#
+# TEST_DATABASE_URL, when set, replaces the throwaway PostgreSQL (DATABASE_URL is ignored here on
+# purpose: tests write to their database, and must not write to the one the demo or a user set up).
+set -euo pipefail
+
+# shellcheck source=scripts/lib/common.sh
+source "$(dirname "$0")/lib/common.sh"
+# shellcheck source=scripts/lib/env.sh
+source "$KB_ROOT/scripts/lib/env.sh"
+# shellcheck source=scripts/lib/pg.sh
+source "$KB_ROOT/scripts/lib/pg.sh"
+# shellcheck source=scripts/lib/app.sh
+source "$KB_ROOT/scripts/lib/app.sh"
+cd "$KB_ROOT"
+
+CHROMIUM=${CHROMIUM_PATH:-/usr/bin/chromium}
+UNIT_REPORT=.data/vitest.json
+E2E_REPORT=.data/vitest-e2e.json
+UNIT_EXIT=""
+E2E_EXIT=""
+FAILURES=()
+SUMMARIZED=0
+STARTED=$SECONDS
+
+cleanup() {
+  kb_app_stop
+  kb_pg_stop
+}
+summarize() { # extra summarizer arguments
+  local runs=()
+  if [[ -n $UNIT_EXIT ]]; then runs+=(--run "vitest=$UNIT_REPORT:$UNIT_EXIT"); fi
+  if [[ -n $E2E_EXIT ]]; then runs+=(--run "browser=$E2E_REPORT:$E2E_EXIT"); fi
+  SUMMARIZED=1
+  node scripts/lib/summarize-results.mjs "${runs[@]}" "${FAILURES[@]}" "$@"
+}
+on_exit() {
+  local code=$?
+  cleanup
+  # Stopped early (a setup step failed, or a signal): CI still gets its closing line.
+  if ((!SUMMARIZED)); then summarize --failure "npm test stopped early (exit code $code)" || true; fi
+}
+on_signal() {
+  trap - INT TERM
+  kb_warn "interrupted: stopping what the tests started"
+  exit "$1"
+}
+trap on_exit EXIT
+trap 'on_signal 130' INT
+trap 'on_signal 143' TERM
+
+# --- what must be installed -------------------------------------------------------------------
+kb_data_dir
+kb_ensure_node_modules
+if [[ ! -x $CHROMIUM ]]; then
+  if kb_is_root; then
+    kb_apt_install chromium fonts-liberation
+  else
+    kb_die "the browser tests need Chromium at $CHROMIUM, and it is missing.
+    Install it (Debian: sudo apt-get install chromium), run npm test as root to have it done,
+    or set CHROMIUM_PATH to a Chromium or Chrome binary."
+  fi
+fi
+export CHROMIUM_PATH=$CHROMIUM
+
+# --- throwaway database and the test environment ----------------------------------------------
+PG_PORT=$(kb_free_port 54339) || kb_die "no free port for the test PostgreSQL (54339-54359)"
+APP_PORT=$(kb_free_port 3100) || kb_die "no free port for the test app (3100-3120)"
+kb_env_test "$APP_PORT"
+if [[ -n ${TEST_DATABASE_URL:-} ]]; then
+  export DATABASE_URL=$TEST_DATABASE_URL
+  kb_say "using the database at TEST_DATABASE_URL"
+else
+  unset DATABASE_URL
+  kb_pg_start pg-test "$PG_PORT" fresh
+fi
+
+MIGRATED=1
+kb_say "applying migrations"
+if ! npx --no-install tsx scripts/migrate.ts; then
+  MIGRATED=0
+  FAILURES+=(--failure "migrations did not apply (scripts/migrate.ts)")
+fi
+
+# --- unit, component and integration tests ----------------------------------------------------
+rm -f "$UNIT_REPORT" "$E2E_REPORT"
+kb_say "running unit, component and integration tests"
+UNIT_EXIT=0
+npx --no-install vitest run --config tests/vitest.config.ts --reporter=default --reporter=json \
+  --outputFile="$UNIT_REPORT" || UNIT_EXIT=$?
+
+# --- browser tests against the production build -----------------------------------------------
+if ((MIGRATED == 0)); then
+  FAILURES+=(--failure "browser tests not run: no migrated database")
+elif ! kb_next_build; then
+  FAILURES+=(--failure "browser tests not run: next build failed")
+elif ! kb_app_start "$APP_PORT" .data/app-test.log; then
+  FAILURES+=(--failure "browser tests not run: the app did not start (log: .data/app-test.log)")
+else
+  kb_say "running browser tests against $E2E_BASE_URL (app log: .data/app-test.log)"
+  E2E_EXIT=0
+  npx --no-install vitest run --config tests/e2e/vitest.e2e.config.ts --reporter=default \
+    --reporter=json --outputFile="$E2E_REPORT" || E2E_EXIT=$?
+fi
+
+# --- stop everything, then the closing line ---------------------------------------------------
+cleanup
+kb_say "tests took $((SECONDS - STARTED)) s"
+summarize

@@ -1,0 +1,69 @@
+// Browser-test harness: playwright-core driving the system Chromium (no browser download), one
+// browser per test file, a fresh browser context (own cookies) per page, and a screenshot of every
+// open page into .data/e2e-shots when a test fails.
+//
+//   const browser = useBrowser();            // at the top of a test file: registers the hooks
+//   const page = await browser.newPage();    // inside a test; page.goto("/kits") is relative to the app
+import { mkdirSync } from "node:fs";
+import { join } from "node:path";
+import { fileURLToPath } from "node:url";
+import { chromium, type Browser, type BrowserContext, type Page } from "playwright-core";
+import { afterAll, afterEach } from "vitest";
+
+export const baseUrl = process.env.E2E_BASE_URL ?? "http://127.0.0.1:3100";
+
+const executablePath = process.env.CHROMIUM_PATH ?? "/usr/bin/chromium";
+const shotsDir = fileURLToPath(new URL("../../../.data/e2e-shots", import.meta.url));
+const isRoot = process.getuid?.() === 0;
+
+// Quiet and offline: without these Chromium keeps reaching for the network (updates, sync, QUIC).
+// Playwright itself gives every launch a fresh --user-data-dir in a temp folder and removes it after.
+const args = [
+  "--headless=new",
+  "--disable-gpu",
+  "--disable-quic",
+  "--no-first-run",
+  "--disable-background-networking",
+  "--disable-component-update",
+  "--disable-sync",
+  ...(isRoot ? ["--no-sandbox"] : []),
+];
+
+export interface BrowserHarness {
+  /** A page in a new, isolated context whose relative URLs resolve against the app. */
+  newPage(): Promise<Page>;
+}
+
+export function useBrowser(): BrowserHarness {
+  let browser: Browser | undefined;
+  let contexts: BrowserContext[] = [];
+
+  afterEach(async (context) => {
+    if (context.task.result?.state === "fail") {
+      mkdirSync(shotsDir, { recursive: true });
+      const name = `${context.task.file?.name ?? "test"}-${context.task.name}`.replace(/[^\w.-]+/g, "_");
+      let n = 0;
+      for (const page of contexts.flatMap((c) => c.pages())) {
+        const path = join(shotsDir, `${name}-${++n}.png`);
+        await page.screenshot({ path, fullPage: true }).catch(() => undefined);
+        console.error(`screenshot of the failed test: ${path} (at ${page.url()})`);
+      }
+    }
+    await Promise.all(contexts.map((c) => c.close().catch(() => undefined)));
+    contexts = [];
+  });
+
+  afterAll(async () => {
+    await browser?.close();
+    browser = undefined;
+  });
+
+  return {
+    async newPage() {
+      browser ??= await chromium.launch({ executablePath, headless: true, args });
+      const context = await browser.newContext({ baseURL: baseUrl });
+      contexts.push(context);
+      return context.newPage();
+    },
+  };
+}
