@@ -1,0 +1,117 @@
+"use client";
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { useForm } from "react-hook-form";
+import { Button, Spinner } from "@/components/ui/button";
+import { SelectField, TextField } from "@/components/ui/field";
+import { ErrorNotice } from "@/components/ui/notice";
+import { ROLE_DESCRIPTIONS, WORKSPACE_ROLES } from "@/contracts/roles";
+import { memberAddBody, type MemberAddBody } from "@/contracts/workspaces";
+import { api, ApiError } from "@/lib/api-client";
+import { queryKeys } from "@/lib/query-keys";
+import type { MemberRow } from "@/lib/types";
+
+type Props = { workspaceId: string; workspaceName: string; myUserId: string; myRole: string; canManage: boolean };
+
+export function MembersPanel({ workspaceId, workspaceName, myUserId, myRole, canManage }: Props) {
+  const queryClient = useQueryClient();
+  const key = queryKeys.members(workspaceId);
+  const members = useQuery({
+    queryKey: key,
+    queryFn: ({ signal }) => api<{ members: MemberRow[] }>(`/api/workspaces/${workspaceId}/members`, { signal }).then((r) => r.members),
+  });
+  const refresh = () => queryClient.invalidateQueries({ queryKey: key });
+  const changeRole = useMutation({
+    mutationFn: (v: { id: string; role: string }) => api(`/api/workspaces/${workspaceId}/members/${v.id}`, { method: "PATCH", body: { role: v.role } }),
+    onSettled: refresh,
+  });
+  const remove = useMutation({
+    mutationFn: (id: string) => api(`/api/workspaces/${workspaceId}/members/${id}`, { method: "DELETE" }),
+    onSettled: refresh,
+  });
+  const grantable = WORKSPACE_ROLES.filter((r) => r !== "owner" || myRole === "owner");
+
+  return (
+    <div className="grid gap-6 lg:grid-cols-[1fr_20rem]">
+      <section aria-labelledby="members-heading">
+        <h1 id="members-heading" className="mb-3 text-xl font-semibold">Members <span className="font-normal text-ink/50">of {workspaceName}</span></h1>
+        {changeRole.isError ? <ErrorNotice title="Could not change the role" message={changeRole.error.message} /> : null}
+        {remove.isError ? <ErrorNotice title="Could not remove the member" message={remove.error.message} /> : null}
+        {members.isPending ? (
+          <div className="rounded-lg border border-ink/10 bg-white p-6 text-sm"><Spinner label="Loading members…" /></div>
+        ) : members.isError ? (
+          <ErrorNotice title="Could not load the members" message={members.error.message} onRetry={() => members.refetch()} />
+        ) : (
+          <table className="w-full overflow-hidden rounded-lg border border-ink/10 bg-white text-sm">
+            <thead className="bg-ink/5 text-left text-xs uppercase tracking-wide text-ink/60">
+              <tr><th className="px-3 py-2">Name</th><th className="px-3 py-2">E-mail</th><th className="px-3 py-2">Role</th><th className="px-3 py-2"><span className="sr-only">Actions</span></th></tr>
+            </thead>
+            <tbody className="divide-y divide-ink/10">
+              {members.data.map((m) => (
+                <tr key={m.id}>
+                  <td className="px-3 py-2 font-medium">{m.name}{m.userId === myUserId ? <span className="ml-1 text-ink/50">(you)</span> : null}</td>
+                  <td className="px-3 py-2 text-ink/70">{m.email}</td>
+                  <td className="px-3 py-2">
+                    {canManage && m.userId !== myUserId && (m.role !== "owner" || myRole === "owner") ? (
+                      <select
+                        aria-label={`Role of ${m.name}`}
+                        value={m.role}
+                        disabled={changeRole.isPending}
+                        onChange={(e) => changeRole.mutate({ id: m.id, role: e.target.value })}
+                        className="rounded border border-ink/20 px-1.5 py-0.5"
+                      >
+                        {grantable.map((r) => <option key={r} value={r}>{r}</option>)}
+                      </select>
+                    ) : (
+                      m.role
+                    )}
+                  </td>
+                  <td className="px-3 py-2 text-right">
+                    {canManage && m.userId !== myUserId && (m.role !== "owner" || myRole === "owner") ? (
+                      <Button variant="ghost" onClick={() => remove.mutate(m.id)} aria-label={`Remove ${m.name}`}>Remove</Button>
+                    ) : null}
+                  </td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        )}
+        <dl className="mt-4 grid gap-1 text-xs text-ink/60">
+          {WORKSPACE_ROLES.map((r) => <div key={r}><dt className="inline font-medium">{r}: </dt><dd className="inline">{ROLE_DESCRIPTIONS[r]}</dd></div>)}
+        </dl>
+      </section>
+      {canManage ? <AddMemberForm workspaceId={workspaceId} roles={grantable} onAdded={refresh} /> : null}
+    </div>
+  );
+}
+
+function AddMemberForm({ workspaceId, roles, onAdded }: { workspaceId: string; roles: readonly string[]; onAdded: () => Promise<void> }) {
+  const { register, handleSubmit, formState, reset, setError } = useForm<MemberAddBody>({
+    resolver: zodResolver(memberAddBody),
+    defaultValues: { email: "", role: "editor" },
+  });
+  const add = useMutation({
+    mutationFn: (v: MemberAddBody) => api(`/api/workspaces/${workspaceId}/members`, { method: "POST", body: v }),
+    onSuccess: () => {
+      reset();
+      return onAdded();
+    },
+    onError: (error) => {
+      if (error instanceof ApiError) for (const f of error.fields) if (f.path === "email" || f.path === "role") setError(f.path, { message: error.message });
+    },
+  });
+  return (
+    <aside className="h-fit rounded-lg border border-ink/10 bg-white p-4">
+      <form onSubmit={handleSubmit((v) => add.mutate(v))} noValidate className="flex flex-col gap-3" aria-label="Add member">
+        <h2 className="font-semibold">Add a member</h2>
+        <p className="text-xs text-ink/60">They need an account already. Invitations by e-mail come later.</p>
+        {add.isError && !(add.error instanceof ApiError && add.error.fields.length) ? <ErrorNotice title="Could not add" message={add.error.message} /> : null}
+        <TextField id="member-email" label="E-mail" type="email" error={formState.errors.email?.message} {...register("email")} />
+        <SelectField id="member-role" label="Role" error={formState.errors.role?.message} {...register("role")}>
+          {roles.map((r) => <option key={r} value={r}>{r}</option>)}
+        </SelectField>
+        <Button type="submit" busy={add.isPending}>Add member</Button>
+      </form>
+    </aside>
+  );
+}

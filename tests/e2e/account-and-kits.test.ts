@@ -1,0 +1,54 @@
+import { randomUUID } from "node:crypto";
+import { describe, expect, it } from "vitest";
+import { useBrowser } from "./helpers/browser";
+
+const browser = useBrowser();
+
+describe("a new designer", () => {
+  it("signs up, lands in a personal workspace, creates and renames a kit, and is sent to sign-in after signing out", async () => {
+    const page = await browser.newPage();
+    const email = `lena-${randomUUID().slice(0, 8)}@test.example`;
+
+    await page.goto("/sign-up");
+    await page.getByLabel("Name").fill("Lena Voss");
+    await page.getByLabel("E-mail").fill(email);
+    await page.getByLabel("Password").fill("steer-lock-42");
+    await page.getByRole("button", { name: "Create account" }).click();
+
+    await page.waitForURL(/\/workspaces\/[^/]+\/kits$/);
+    const selected = await page.getByRole("combobox", { name: "Workspace" }).locator("option:checked").textContent();
+    expect(selected).toBe("Lena's workspace");
+    await page.getByText("No kits yet").waitFor();
+
+    await page.getByLabel("Name").fill("Sandpiper front corner");
+    await page.getByRole("button", { name: "Create kit" }).click();
+    const list = page.getByRole("list", { name: "Kits" });
+    await list.getByText("Sandpiper front corner").waitFor();
+
+    await page.getByRole("button", { name: "Rename Sandpiper front corner" }).click();
+    const rename = page.getByLabel("New name for Sandpiper front corner");
+    await rename.fill("Sandpiper front corner, 4 mm neck");
+    await rename.press("Enter");
+    await list.getByText("Sandpiper front corner, 4 mm neck").waitFor();
+
+    await page.reload();
+    await page.getByRole("list", { name: "Kits" }).getByText("Sandpiper front corner, 4 mm neck").waitFor();
+    expect(await page.getByTestId("kit-name").allTextContents()).toEqual(["Sandpiper front corner, 4 mm neck"]);
+
+    await page.getByRole("button", { name: "Sign out" }).click();
+    await page.waitForURL(/\/sign-in/);
+    await page.goto("/kits");
+    await page.waitForURL(/\/sign-in\?next=%2Fkits/);
+    await page.getByRole("heading", { name: "Sign in" }).waitFor();
+  });
+
+  it("sees a clear message for a wrong password", async () => {
+    const page = await browser.newPage();
+    await page.goto("/sign-in");
+    await page.getByLabel("E-mail").fill("nobody-here@test.example");
+    await page.getByLabel("Password").fill("wrong-password");
+    await page.getByRole("button", { name: "Sign in" }).click();
+    await page.getByRole("alert").getByText("Could not sign in").waitFor();
+    expect(page.url()).toMatch(/\/sign-in/);
+  });
+});
