@@ -41,7 +41,7 @@ kb_app_start() { # PORT [LOG]
 # True while PID runs (a zombie, exited but not yet reaped, does not count).
 kb_pid_running() {
   local stat
-  stat=$(<"/proc/$1/stat") 2>/dev/null || return 1
+  stat=$(cat "/proc/$1/stat" 2>/dev/null) || return 1
   stat=${stat##*) } # the command name may contain spaces and parentheses
   [[ ${stat%% *} != Z ]]
 }
