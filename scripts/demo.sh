@@ -44,7 +44,8 @@ kb_pg_start pg "$PG_PORT" keep
 kb_say "applying migrations"
 npx --no-install tsx scripts/migrate.ts
 kb_say "seeding the demo data"
-SEED_OUTPUT=$(npx --no-install tsx scripts/seed.ts) || {
+# react-server: the seed imports server modules guarded by `server-only`, which throws elsewhere.
+SEED_OUTPUT=$(npx --no-install tsx --conditions=react-server scripts/seed.ts) || {
   printf '%s\n' "$SEED_OUTPUT"
   kb_die "seeding failed"
 }
