@@ -31,6 +31,8 @@ export default defineConfig({
           environment: "node",
           include: ["tests/api/**/*.test.ts", "tests/server/**/*.test.ts"],
           fileParallelism: false,
+          // Production keeps the auth rate limit on; so do these tests (and one of them checks it).
+          env: { KB_AUTH_RATE_LIMIT: "on" },
           testTimeout: 30_000,
           hookTimeout: 60_000,
         },

@@ -32,6 +32,11 @@ function cookieFrom(res: Response): string {
   return set.map((c) => c.split(";")[0]).join("; ");
 }
 
+export function randomClientIp(): string {
+  const b = () => Math.floor(Math.random() * 254) + 1;
+  return `198.18.${b()}.${b()}`;
+}
+
 export function uniqueEmail(tag: string): string {
   return `${tag}-${randomUUID().slice(0, 8)}@test.example`;
 }
@@ -41,7 +46,8 @@ export async function signUp(name: string, email = uniqueEmail(name.toLowerCase(
   const res = await authPost(
     new Request(`${BASE}/api/auth/sign-up/email`, {
       method: "POST",
-      headers: { "content-type": "application/json", origin: new URL(BASE).origin },
+      // A distinct client address per sign-up, so the auth rate limit (on in these tests) never pools them.
+      headers: { "content-type": "application/json", origin: new URL(BASE).origin, "x-forwarded-for": randomClientIp() },
       body: JSON.stringify({ name, email, password }),
     }),
   );
@@ -54,7 +60,7 @@ export async function signIn(email: string, password: string, headers: Record<st
   return authPost(
     new Request(`${BASE}/api/auth/sign-in/email`, {
       method: "POST",
-      headers: { "content-type": "application/json", origin: new URL(BASE).origin, ...headers },
+      headers: { "content-type": "application/json", origin: new URL(BASE).origin, "x-forwarded-for": randomClientIp(), ...headers },
       body: JSON.stringify({ email, password }),
     }),
   );

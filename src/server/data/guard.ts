@@ -5,6 +5,7 @@ import { auth } from "../auth/auth";
 import { db } from "../db/client";
 import { members, workspaces } from "../db/schema";
 import { forbidden, HttpError, unauthorized } from "../http/errors";
+import { firstWorkspaceIdOf, setActiveWorkspace } from "./workspaces";
 
 export type SessionUser = { id: string; name: string; email: string };
 export type Signed = { user: SessionUser; sessionId: string; activeWorkspaceId: string | null };
@@ -15,11 +16,13 @@ export async function requireSession(headers: Headers): Promise<Signed> {
   const found = await auth.api.getSession({ headers });
   if (!found) throw unauthorized();
   const { user, session } = found;
-  return {
-    user: { id: user.id, name: user.name, email: user.email },
-    sessionId: session.id,
-    activeWorkspaceId: (session as { activeOrganizationId?: string | null }).activeOrganizationId ?? null,
-  };
+  let activeWorkspaceId = (session as { activeOrganizationId?: string | null }).activeOrganizationId ?? null;
+  if (!activeWorkspaceId) {
+    // The sign-up session is created before the personal workspace exists; settle it on first use.
+    activeWorkspaceId = await firstWorkspaceIdOf(user.id);
+    if (activeWorkspaceId) await setActiveWorkspace(session.id, activeWorkspaceId);
+  }
+  return { user: { id: user.id, name: user.name, email: user.email }, sessionId: session.id, activeWorkspaceId };
 }
 
 const WORKSPACE_ID = /^[A-Za-z0-9_-]{1,64}$/;
