@@ -22,6 +22,11 @@ function inputRad(thetaDeg: number): number {
   return requireFinite(thetaDeg, CARDAN, "input rotation angle") * RAD_PER_DEG;
 }
 
+/** 1 − sin²β cos²θ1, written as cos²β + sin²β sin²θ1 so it keeps its digits near β = 90°. */
+function ratioDenominator(betaRad: number, inputRad: number): number {
+  return Math.cos(betaRad) ** 2 + (Math.sin(betaRad) * Math.sin(inputRad)) ** 2;
+}
+
 /** Puts `angleRad` on the same turn as `nearRad` (within ±π of it). */
 function unwrapNear(angleRad: number, nearRad: number): number {
   return nearRad + Math.atan2(Math.sin(angleRad - nearRad), Math.cos(angleRad - nearRad));
@@ -41,9 +46,7 @@ export function cardanOutputAngleDeg(betaDeg: number, inputAngleDeg: number): nu
 /** Speed ratio ω2/ω1 = cos β / (1 − sin²β cos²θ1) at input angle θ1 (convention A); between cos β and 1/cos β. */
 export function cardanSpeedRatio(betaDeg: number, inputAngleDeg: number): number {
   const beta = bendRad(betaDeg);
-  const c = Math.cos(inputRad(inputAngleDeg));
-  const s = Math.sin(beta);
-  return Math.cos(beta) / (1 - s * s * c * c);
+  return Math.cos(beta) / ratioDenominator(beta, inputRad(inputAngleDeg));
 }
 
 /**
@@ -54,7 +57,7 @@ export function cardanOutputAccelerationPerInputSpeedSquared(betaDeg: number, in
   const beta = bendRad(betaDeg);
   const t1 = inputRad(inputAngleDeg);
   const s2 = Math.sin(beta) ** 2;
-  const denominator = 1 - s2 * Math.cos(t1) ** 2;
+  const denominator = ratioDenominator(beta, t1);
   return (-Math.cos(beta) * s2 * Math.sin(2 * t1)) / (denominator * denominator);
 }
 
