@@ -16,17 +16,27 @@ export const DEMO_PEOPLE: { name: string; email: string; role: WorkspaceRole }[]
   { name: "Priya Lund", email: "priya@harrowflats.example", role: "viewer" },
 ];
 
-async function ensureUser(person: { name: string; email: string }): Promise<string> {
+async function ensureUser(person: { name: string; email: string }): Promise<{ id: string; isNew: boolean }> {
   const [found] = await db.select({ id: users.id }).from(users).where(eq(users.email, person.email)).limit(1);
-  if (found) return found.id;
+  if (found) return { id: found.id, isNew: false };
   const res = await auth.api.signUpEmail({ body: { name: person.name, email: person.email, password: DEMO_PASSWORD } });
-  return res.user.id;
+  return { id: res.user.id, isNew: true };
+}
+
+// The demo people share one workspace; the personal one sign-up gave them would only distract.
+async function dropPersonalWorkspaces(userId: string, keep: string) {
+  const owned = await db.select({ id: members.organizationId }).from(members).where(and(eq(members.userId, userId), eq(members.role, "owner")));
+  for (const { id } of owned) {
+    if (id === keep) continue;
+    const [anyKit] = await db.select({ id: kits.id }).from(kits).where(eq(kits.workspaceId, id)).limit(1);
+    if (!anyKit) await db.delete(workspaces).where(eq(workspaces.id, id));
+  }
 }
 
 /** Creates the demo workspace, people and kits when missing; leaves existing data alone. */
 export async function seedDemo(): Promise<{ workspaceId: string; created: number }> {
   const ids = [];
-  for (const person of DEMO_PEOPLE) ids.push({ ...person, id: await ensureUser(person) });
+  for (const person of DEMO_PEOPLE) ids.push({ ...person, ...(await ensureUser(person)) });
 
   let [ws] = await db.select({ id: workspaces.id }).from(workspaces).where(eq(workspaces.slug, DEMO_WORKSPACE.slug)).limit(1);
   if (!ws) {
@@ -39,6 +49,8 @@ export async function seedDemo(): Promise<{ workspaceId: string; created: number
       .values({ id: randomUUID(), organizationId: ws.id, userId: person.id, role: person.role })
       .onConflictDoNothing();
   }
+
+  for (const person of ids) if (person.isNew) await dropPersonalWorkspaces(person.id, ws.id);
 
   let created = 0;
   const author = ids[0]!.id;
