@@ -5,6 +5,7 @@ import * as kitRoute from "@/app/api/workspaces/[workspaceId]/kits/[kitId]/route
 import * as layoutRoute from "@/app/api/workspaces/[workspaceId]/kits/[kitId]/layout/route";
 import * as membersRoute from "@/app/api/workspaces/[workspaceId]/members/route";
 import * as workspacesRoute from "@/app/api/workspaces/route";
+import { TARNWICK_10_BASE, TARNWICK_10_THIN_NECK } from "@/contracts/demo-layouts";
 import { call, signUp } from "../helpers/api";
 
 type P = { workspaceId: string };
@@ -139,7 +140,7 @@ describe("editor writes, with optimistic locking", () => {
     expect(second.status).toBe(409);
     expect(second.json.error.currentVersion).toBe(2);
     expect(second.json.error.fields[0].path).toBe("version");
-    const stalelayout = await call<K>(layoutRoute.PUT, "PUT", `${kitPath(ws, id)}/layout`, { workspaceId: ws, kitId: id }, { ...e, body: { version: 1, layout: {} } });
+    const stalelayout = await call<K>(layoutRoute.PUT, "PUT", `${kitPath(ws, id)}/layout`, { workspaceId: ws, kitId: id }, { ...e, body: { version: 1, layout: TARNWICK_10_THIN_NECK } });
     expect(stalelayout.status).toBe(409);
     const now = await call<K>(kitRoute.GET, "GET", kitPath(ws, id), { workspaceId: ws, kitId: id }, e);
     expect(now.json.kit).toMatchObject({ name: "First tab", version: 2 });
@@ -189,5 +190,44 @@ describe("bad bodies are refused with the field and the reason", () => {
   it("a malformed kit id is a 404, not a database error", async () => {
     const res = await call<K>(kitRoute.GET, "GET", kitPath(ws, "not-a-uuid"), { workspaceId: ws, kitId: "not-a-uuid" }, { cookie: editor.cookie });
     expect(res.status).toBe(404);
+  });
+});
+
+describe("layouts stored with a kit", () => {
+  it("a new kit without a layout starts from the demo baseline corner", async () => {
+    const created = await call<P>(kitsRoute.POST, "POST", kitsPath(ws), { workspaceId: ws }, { cookie: editor.cookie, body: { name: "Fresh corner", scale: "1:10" } });
+    expect(created.status).toBe(201);
+    expect(created.json.kit.layout).toEqual(TARNWICK_10_BASE);
+  });
+
+  it("replacing the layout validates it against the layout schema, naming the field", async () => {
+    const created = await call<P>(kitsRoute.POST, "POST", kitsPath(ws), { workspaceId: ws }, { cookie: editor.cookie, body: { name: "Neck trial", scale: "1:10" } });
+    const id = created.json.kit.id as string;
+    const bad = { ...TARNWICK_10_BASE, drive: { ...TARNWICK_10_BASE.drive, neckDiameterMm: "thin" } };
+    const res = await call<K>(layoutRoute.PUT, "PUT", `${kitPath(ws, id)}/layout`, { workspaceId: ws, kitId: id }, { cookie: editor.cookie, body: { version: 1, layout: bad } });
+    expect(res.status).toBe(422);
+    expect(res.json.error.fields[0].path).toBe("layout.drive.neckDiameterMm");
+    const ok = await call<K>(layoutRoute.PUT, "PUT", `${kitPath(ws, id)}/layout`, { workspaceId: ws, kitId: id }, { cookie: editor.cookie, body: { version: 1, layout: TARNWICK_10_THIN_NECK } });
+    expect(ok.status).toBe(200);
+    expect(ok.json.kit.version).toBe(2);
+    expect(ok.json.kit.layout.drive.neckDiameterMm).toBe(4);
+  });
+
+  it("an older (schema 0) document is accepted and comes back upgraded", async () => {
+    const { schema: _schema, sideView, topView, strength, frontView, ...rest } = TARNWICK_10_BASE;
+    void _schema;
+    const { steeringInput, ...top0 } = topView;
+    const { gearRatios, ...strength0 } = strength;
+    const old = {
+      ...rest,
+      frontView: { ...frontView, casterDeg: sideView.casterDeg, casterOffsetMm: sideView.casterOffsetMm },
+      topView: { ...top0, rackTravelMm: steeringInput.travelMm },
+      strength: { ...strength0, gearRatio: gearRatios[0]! * gearRatios[1]! },
+    };
+    const created = await call<P>(kitsRoute.POST, "POST", kitsPath(ws), { workspaceId: ws }, { cookie: editor.cookie, body: { name: "Old file", scale: "1:10", layout: old } });
+    expect(created.status).toBe(201);
+    expect(created.json.kit.layout.schema).toBe(1);
+    expect(created.json.kit.layout.sideView).toEqual({ casterDeg: 22, casterOffsetMm: -5 });
+    expect(created.json.kit.layout.topView.steeringInput).toEqual({ kind: "rack", travelMm: 10 });
   });
 });

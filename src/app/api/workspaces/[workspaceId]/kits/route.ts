@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { kitCreateFields } from "@/contracts/kits";
 import { createKit, listKits } from "@/server/data/kits";
-import { incomingLayout, starterLayout } from "@/server/data/layouts";
+import { incomingLayout, requireValidLayout, starterLayout } from "@/server/data/layouts";
 import { readJson } from "@/server/http/body";
 import { workspaceRoute } from "@/server/http/route";
 
@@ -16,7 +16,7 @@ const createBody = kitCreateFields.extend({ layout: incomingLayout.optional() })
 export const POST = workspaceRoute<Params, "kit">("kit", "create", async (req, access) => {
   const body = await readJson(req, createBody);
   const { layout, ...fields } = body;
-  const kit = await createKit(access.workspace.id, access.user.id, fields, layout ?? starterLayout());
+  const kit = await createKit(access.workspace.id, access.user.id, fields, layout === undefined ? starterLayout() : requireValidLayout(layout));
   return Response.json({ kit }, { status: 201, headers: { location: `/api/workspaces/${access.workspace.id}/kits/${kit.id}` } });
 });
 
