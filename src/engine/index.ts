@@ -1,0 +1,12 @@
+/**
+ * The engine's one import path. Pure TypeScript geometry for the left front corner of a small car
+ * (ISO 8855 axes, mm and degrees); the right corner mirrors it.
+ */
+export { analyzeLayout, ANALYZE_LIMITS, type AnalyzeOptions } from "./analyze";
+export type * from "./analysis-result";
+export type * from "./kit-layout";
+export type * from "./geometry-types";
+export { GeometryError } from "./errors";
+export { OUTPUT_FIELDS, type OutputField } from "./output-fields";
+export type { Vec3 } from "./math/vec3";
+export type { Vec2 } from "./math/vec2";
