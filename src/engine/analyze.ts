@@ -87,14 +87,13 @@ interface Context {
 
 function cornerRow(m: FrontViewModel, pose: FrontViewPose, pts: StaticPoints, tieRodMm: number, branch: 1 | -1): CornerRow {
   const rot = pose.uprightRotationRad;
-  const moved = (p: Vec3) => frontViewKnucklePoint(m, pose, p);
-  const axisPoint = moved(pts.axis.point);
+  const axisPoint = frontViewKnucklePoint(m, pose, pts.axis.point);
   const k = vec3RotateX(pts.axis.direction, rot);
   const axis: KingpinAxis = { point: axisPoint, direction: k };
-  const circle = armBallCircle(axis, moved(pts.armBall));
+  const circle = armBallCircle(axis, frontViewKnucklePoint(m, pose, pts.armBall));
   const lk = rackLinkage(circle, pts.rackEnd, tieRodMm, branch);
   const w = vec3RotateX(pts.spinAxis, rot);
-  const o = moved(pts.outboardJoint);
+  const o = frontViewKnucklePoint(m, pose, pts.outboardJoint);
   const r: Vec3 = [o[0] - axisPoint[0], o[1] - axisPoint[1], o[2] - axisPoint[2]];
   const [kx, ky, kz] = k;
   return {
@@ -226,9 +225,13 @@ interface RowGrid {
   readonly shaft: Float64Array;
 }
 
-function rowGrid(row: CornerRow, racks: Float64Array, ctx: Context, scratch: PointScratch): RowGrid {
+function rowGridBuffers(n: number): RowGrid {
+  return { joint: new Float64Array(n), road: new Float64Array(n), spinZ: new Float64Array(n), knuckle: new Float64Array(n), shaft: new Float64Array(n) };
+}
+
+/** Fills g (reused from row to row) with the row's values at every rack sample. */
+function rowGrid(row: CornerRow, racks: Float64Array, ctx: Context, scratch: PointScratch, g: RowGrid): RowGrid {
   const n = racks.length;
-  const g: RowGrid = { joint: new Float64Array(n), road: new Float64Array(n), spinZ: new Float64Array(n), knuckle: new Float64Array(n), shaft: new Float64Array(n) };
   for (let j = 0; j < n; j++) {
     if (evalPoint(row, racks[j], ctx, scratch)) {
       g.joint[j] = scratch.jointDeg;
@@ -396,6 +399,7 @@ export function analyzeLayout(layout: KitLayout, options: AnalyzeOptions = {}): 
   const perTravel: SteerLockResult[] = [];
   const envJoint: (number | null)[][] = [];
   const envRoad: (number | null)[][] = [];
+  const buffers = rowGridBuffers(nS);
   let maxJoint = -Infinity;
   let maxAtT = 0;
   let maxAtR = 0;
@@ -405,7 +409,7 @@ export function analyzeLayout(layout: KitLayout, options: AnalyzeOptions = {}): 
   for (let i = 0; i < nT; i++) {
     const pose = poses[i];
     const row = cornerRow(fv, pose, pts, tieRodMm, branch);
-    const g = rowGrid(row, racks, ctx, scratch);
+    const g = rowGrid(row, racks, ctx, scratch, buffers);
     const lock = steerLockOnRow(row, g, lockInputs, scratch, warnings);
     perTravel.push(lock);
     const jRow: (number | null)[] = new Array(nS);
@@ -453,7 +457,7 @@ export function analyzeLayout(layout: KitLayout, options: AnalyzeOptions = {}): 
   }
 
   // Steering sweep at static ride height.
-  const sg = rowGrid(staticRow, racks, ctx, scratch);
+  const sg = rowGrid(staticRow, racks, ctx, scratch, buffers);
   const staticLock = steerLockOnRow(staticRow, sg, lockInputs, scratch, warnings);
   const staticFigures = steerAxisFigures(staticRow.axis, pts.wheelCentre, pts.spinAxis, [0, staticPose.contactPatch[0], staticPose.contactPatch[1]]);
   const kingpinTrackMm = 2 * staticFigures.groundPoint[1];
@@ -466,9 +470,8 @@ export function analyzeLayout(layout: KitLayout, options: AnalyzeOptions = {}): 
     const turn = Math.sign(racks[j]) * leftTurnSign;
     const inner = turn >= 0 ? left : -right;
     const outer = turn >= 0 ? right : -left;
-    const ack = (fn: typeof ackermannTurnCentrePercent) =>
-      inner >= ACKERMANN_MIN_ANGLE_DEG && outer >= ACKERMANN_MIN_ANGLE_DEG ? fn(inner, outer, kingpinTrackMm, wheelbase) : null;
     if (Number.isNaN(left) || Number.isNaN(right)) continue;
+    const ackOk = inner >= ACKERMANN_MIN_ANGLE_DEG && outer >= ACKERMANN_MIN_ANGLE_DEG;
     steps.push({
       rackMm: racks[j],
       leftKnuckleRotationDeg: radToDeg(sg.knuckle[j]),
@@ -480,9 +483,9 @@ export function analyzeLayout(layout: KitLayout, options: AnalyzeOptions = {}): 
       rightJointAngleDeg: sg.joint[m],
       innerDeg: inner,
       outerDeg: outer,
-      ackermannTurnCentrePct: ack(ackermannTurnCentrePercent),
-      ackermannInnerRefPct: ack(ackermannInnerReferencePercent),
-      ackermannOuterRefPct: ack(ackermannOuterReferencePercent),
+      ackermannTurnCentrePct: ackOk ? ackermannTurnCentrePercent(inner, outer, kingpinTrackMm, wheelbase) : null,
+      ackermannInnerRefPct: ackOk ? ackermannInnerReferencePercent(inner, outer, kingpinTrackMm, wheelbase) : null,
+      ackermannOuterRefPct: ackOk ? ackermannOuterReferencePercent(inner, outer, kingpinTrackMm, wheelbase) : null,
     });
   }
   const ackAtLock = (fn: typeof ackermannTurnCentrePercent) =>
