@@ -1,0 +1,15 @@
+import { expect } from "vitest";
+
+/** Angle tolerance of the reference sheet: ±0.001° (REFERENCES.md, suggested test tolerances). */
+export const DEG_TOL = 1e-3;
+
+/** |actual − expected| ≤ tol, with both values in the failure message. */
+export function expectNear(actual: number, expected: number, tol: number, what = "value"): void {
+  expect(Number.isFinite(actual), `${what} is finite`).toBe(true);
+  expect(Math.abs(actual - expected), `${what}: got ${actual}, expected ${expected} ± ${tol}`).toBeLessThanOrEqual(tol);
+}
+
+/** Relative tolerance 1e-4 (REFERENCES.md) unless given. */
+export function expectRel(actual: number, expected: number, rel = 1e-4, what = "value"): void {
+  expectNear(actual, expected, Math.abs(expected) * rel, what);
+}
