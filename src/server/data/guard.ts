@@ -11,18 +11,64 @@ export type SessionUser = { id: string; name: string; email: string };
 export type Signed = { user: SessionUser; sessionId: string; activeWorkspaceId: string | null };
 export type WorkspaceAccess = Signed & { workspace: { id: string; name: string; slug: string }; role: string };
 
+// Resolving a session through better-auth costs about a millisecond even with its signed cookie cache,
+// which is most of a small API call. Remember the answer per session token briefly; better-auth's own
+// cookie cache already lets a revoked session live up to 60 s, so 10 s here loosens nothing.
+const SESSION_MEMO_MS = 10_000;
+const SESSION_MEMO_MAX = 5_000;
+const sessionMemo = new Map<string, { signed: Signed; until: number }>();
+
+function sessionToken(headers: Headers): string | null {
+  const cookie = headers.get("cookie");
+  if (!cookie) return null;
+  const match = /(?:^|;\s*)(?:__Secure-)?better-auth\.session_token=([^;]+)/.exec(cookie);
+  return match ? match[1]! : null;
+}
+
+export function forgetCachedSession(headers: Headers): void {
+  const token = sessionToken(headers);
+  if (token) sessionMemo.delete(token);
+}
+
 /** The signed-in user, or a 401. Every page, action and route handler starts here. */
 export async function requireSession(headers: Headers): Promise<Signed> {
+  const token = sessionToken(headers);
+  if (!token) throw unauthorized();
+  const now = Date.now();
+  const memo = sessionMemo.get(token);
+  if (memo && memo.until > now) return memo.signed;
+
   const found = await auth.api.getSession({ headers });
-  if (!found) throw unauthorized();
-  const { user, session } = found;
-  let activeWorkspaceId = (session as { activeOrganizationId?: string | null }).activeOrganizationId ?? null;
-  if (!activeWorkspaceId) {
-    // The sign-up session is created before the personal workspace exists; settle it on first use.
-    activeWorkspaceId = await firstWorkspaceIdOf(user.id);
-    if (activeWorkspaceId) await setActiveWorkspace(session.id, activeWorkspaceId);
+  if (!found) {
+    sessionMemo.delete(token);
+    throw unauthorized();
   }
-  return { user: { id: user.id, name: user.name, email: user.email }, sessionId: session.id, activeWorkspaceId };
+  const { user, session } = found;
+  const activeWorkspaceId = (session as { activeOrganizationId?: string | null }).activeOrganizationId ?? null;
+  const signed = { user: { id: user.id, name: user.name, email: user.email }, sessionId: session.id, activeWorkspaceId };
+  if (sessionMemo.size >= SESSION_MEMO_MAX) sessionMemo.delete(sessionMemo.keys().next().value!);
+  sessionMemo.set(token, { signed, until: Math.min(now + SESSION_MEMO_MS, new Date(session.expiresAt).getTime()) });
+  return signed;
+}
+
+/**
+ * The workspace a session opens by default. The sign-up session is created before the personal
+ * workspace exists, so an unset one is settled (and stored) on first use.
+ */
+export async function resolveActiveWorkspace(signed: Signed): Promise<string | null> {
+  if (signed.activeWorkspaceId) return signed.activeWorkspaceId;
+  const first = await firstWorkspaceIdOf(signed.user.id);
+  if (first) {
+    await setActiveWorkspace(signed.sessionId, first);
+    signed.activeWorkspaceId = first; // the remembered session sees it too
+  }
+  return first;
+}
+
+/** Stores the session's default workspace (and drops the remembered session so the change shows at once). */
+export async function chooseActiveWorkspace(headers: Headers, signed: Signed, workspaceId: string): Promise<void> {
+  await setActiveWorkspace(signed.sessionId, workspaceId);
+  forgetCachedSession(headers);
 }
 
 const WORKSPACE_ID = /^[A-Za-z0-9_-]{1,64}$/;

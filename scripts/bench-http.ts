@@ -1,0 +1,57 @@
+// HTTP throughput of POST /api/analyze against the trivial GET /api/health of the same production
+// server, in one run, on loopback, bounded in time. Prints both rates and their ratio (target ≥ 0.5).
+import autocannon from "autocannon";
+import { TARNWICK_10_BASE } from "../src/contracts/demo-layouts";
+
+const base = process.env.BENCH_BASE_URL;
+if (!base) {
+  console.error("bench-http: BENCH_BASE_URL is not set (run it through `npm run bench`)");
+  process.exit(1);
+}
+const host = new URL(base).hostname;
+if (host !== "127.0.0.1" && host !== "localhost" && host !== "::1") {
+  console.error("bench-http: refusing to load anything but loopback");
+  process.exit(1);
+}
+const seconds = Number(process.env.BENCH_HTTP_SECONDS ?? 8);
+const connections = Number(process.env.BENCH_HTTP_CONNECTIONS ?? 8);
+
+async function signUp(): Promise<string> {
+  const res = await fetch(`${base}/api/auth/sign-up/email`, {
+    method: "POST",
+    headers: { "content-type": "application/json", origin: new URL(base!).origin },
+    body: JSON.stringify({ name: "Bench Runner", email: `bench-${Date.now()}@bench.example`, password: "bench-password-1" }),
+  });
+  if (!res.ok) throw new Error(`sign-up failed: ${res.status} ${await res.text()}`);
+  return res.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
+}
+
+type Run = { rps: number; p50: number; p99: number; non2xx: number; errors: number; total: number };
+
+type Target = { path: string; method?: "GET" | "POST"; headers?: Record<string, string>; body?: string };
+
+async function load(title: string, target: Target): Promise<Run> {
+  const { path, ...rest } = target;
+  const r = await autocannon({ url: base + path, connections, duration: seconds, ...rest });
+  const run = { rps: r.requests.average, p50: r.latency.p50, p99: r.latency.p99, non2xx: r.non2xx, errors: r.errors, total: r.requests.total };
+  console.log(`  ${title.padEnd(34)} ${run.rps.toFixed(0).padStart(6)} req/s   p50 ${run.p50} ms   p99 ${run.p99} ms   non-2xx ${run.non2xx}   errors ${run.errors}`);
+  return run;
+}
+
+const cookie = await signUp();
+const body = JSON.stringify({ layout: TARNWICK_10_BASE });
+const analyze: Target = { path: "/api/analyze", method: "POST", headers: { "content-type": "application/json", cookie }, body };
+
+// Warm both routes (JIT, connection pools) before measuring.
+await autocannon({ url: `${base}/api/health`, connections: 2, amount: 200 });
+await autocannon({ url: `${base}/api/analyze`, connections: 2, amount: 200, method: "POST", headers: analyze.headers, body });
+
+console.log(`HTTP throughput, ${connections} connections, ${seconds} s each, loopback:`);
+const health = await load("GET /api/health (baseline)", { path: "/api/health" });
+const analysis = await load("POST /api/analyze (demo kit, 21×41)", analyze);
+const ratio = analysis.rps / health.rps;
+console.log(`  ratio analyze / health: ${ratio.toFixed(2)} (target ≥ 0.50) ${ratio >= 0.5 ? "met" : "NOT met"}`);
+if (analysis.non2xx || health.non2xx || analysis.errors || health.errors) {
+  console.error("bench-http: some requests failed; the figures above are not to be trusted");
+  process.exitCode = 1;
+}
