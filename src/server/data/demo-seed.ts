@@ -54,7 +54,8 @@ export async function seedDemo(): Promise<{ workspaceId: string; created: number
 
   let created = 0;
   const author = ids[0]!.id;
-  for (const kit of demoKits()) {
+  // Newest first in the list, so insert the baseline last.
+  for (const kit of [...demoKits()].reverse()) {
     const [exists] = await db
       .select({ id: kits.id })
       .from(kits)
