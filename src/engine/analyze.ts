@@ -12,10 +12,10 @@ import { GeometryError } from "./errors";
 import type { KitLayout, KitMaterial } from "./kit-layout";
 import { radToDeg } from "./math/angle";
 import { vec3RotateX } from "./math/rotation";
-import { rootBracketedBrent } from "./math/root-find";
+import { rootBracketIllinois } from "./math/root-find";
 import type { Vec3 } from "./math/vec3";
 import { ackermannInnerReferencePercent, ackermannOuterReferencePercent, ackermannTurnCentrePercent } from "./steering/ackermann";
-import { armBallCircle, rackLinkage, rackReachMargin, tieRodBranch, tieRodClosure, type RackLinkage } from "./steering/linkage";
+import { armBallCircle, rackLinkage, tieRodBranch, tieRodClosure, type RackLinkage } from "./steering/linkage";
 import { kingpinAxisFromBallJoints, spinAxisFromCamberDeg, steerAxisFigures, type KingpinAxis } from "./steering/steer-axis";
 import { analyzeStrength, materialById, type MaterialFigure, type StrengthResult } from "./strength/index";
 import { frontViewKnucklePoint, frontViewModel, frontViewPoseAtTravel, frontViewSweep, travelSteps, type FrontViewModel, type FrontViewPose } from "./suspension/front-view";
@@ -267,20 +267,23 @@ function lockJointAt(row: CornerRow, sg: number, u: number, ctx: Context, scratc
   return inner > scratch.jointDeg ? inner : scratch.jointDeg;
 }
 
-/** The smaller tie-rod reach margin of the two wheels at left-turn rack u (mm⁴; < 0 = cannot reach). */
-function lockMarginAt(row: CornerRow, sg: number, u: number): number {
-  return Math.min(rackReachMargin(row.lk, sg * u), rackReachMargin(row.lk, -sg * u));
+/** True when the tie rod reaches at both wheels' rack positions ±u. */
+function lockReachesAt(row: CornerRow, sg: number, u: number, ctx: Context, scratch: PointScratch): boolean {
+  return evalPoint(row, sg * u, ctx, scratch) && evalPoint(row, -sg * u, ctx, scratch);
 }
 
-/** Rack u in [lo, hi] where the joint angle reaches limitDeg (Brent; the bracket holds a crossing). */
+/**
+ * Rack u in [lo, hi] where the joint angle reaches limitDeg: the inside end of an Illinois bracket
+ * narrowed to 1e-10 mm, so the reported lock never passes the limit.
+ */
 function lockJointRoot(row: CornerRow, li: LockInputs, scratch: PointScratch, lo: number, hi: number): number {
   const sg = li.leftTurnSign;
   const f = (u: number) => {
     const v = lockJointAt(row, sg, u, li.ctx, scratch);
     return v === Infinity ? 1 : v - li.jointLimitDeg;
   };
-  const r = rootBracketedBrent(f, lo, hi, 1e-8);
-  return Number.isNaN(r) ? lo : r;
+  const r = rootBracketIllinois(f, lo, hi, 1e-10);
+  return r === null ? lo : r.lo;
 }
 
 /**
@@ -312,10 +315,17 @@ function steerLockOnRow(row: CornerRow, grid: RowGrid, li: LockInputs, scratch: 
       const jOut = n - 1 - jIn;
       const a = grid.joint[jIn];
       const b = grid.joint[jOut];
-      if ((Number.isNaN(a) || Number.isNaN(b)) && lockMarginAt(row, sg, u) < 0) {
-        // The tie rod stops reaching between prevU and u: find where, then check the joint on the way.
-        const uLink = rootBracketedBrent((x) => lockMarginAt(row, sg, x), prevU, u, 1e-9);
-        const safeU = Number.isNaN(uLink) ? prevU : uLink * (1 - 1e-12);
+      if (Number.isNaN(a) || Number.isNaN(b)) {
+        // The tie rod stops reaching between prevU and u: bisect on the solver's own reach test (so the
+        // lock is a point that solves), then check the joint on the way there.
+        let lo = prevU;
+        let hi = u;
+        for (let it = 0; it < 52 && hi - lo > 1e-12; it++) {
+          const mid = 0.5 * (lo + hi);
+          if (lockReachesAt(row, sg, mid, ctx, scratch)) lo = mid;
+          else hi = mid;
+        }
+        const safeU = lo;
         const jLink = lockJointAt(row, sg, safeU, ctx, scratch);
         if (jLink !== Infinity && jLink >= jointLimitDeg) {
           lockU = lockJointRoot(row, li, scratch, prevU, safeU);
@@ -335,11 +345,14 @@ function steerLockOnRow(row: CornerRow, grid: RowGrid, li: LockInputs, scratch: 
       prevU = u;
     }
   }
-  const inner = evalPoint(row, sg * lockU, ctx, scratch) ? scratch.roadDeg : 0;
+  if (!lockReachesAt(row, sg, lockU, ctx, scratch)) throw new GeometryError("tie rod", `cannot reach the steering arm at the steer lock at ${describeTravel(row.travelMm)}`);
+  evalPoint(row, sg * lockU, ctx, scratch);
+  const inner = scratch.roadDeg;
   const innerJoint = scratch.jointDeg;
-  const outer = evalPoint(row, -sg * lockU, ctx, scratch) ? -scratch.roadDeg : 0;
+  evalPoint(row, -sg * lockU, ctx, scratch);
+  const outer = -scratch.roadDeg;
   const jointDeg = Math.max(innerJoint, scratch.jointDeg);
-  return { travelMm: row.travelMm, rackMm: sg * lockU, innerDeg: inner, outerDeg: outer, jointAngleDeg: jointDeg, limitedBy: reason };
+  return { travelMm: row.travelMm, rackMm: lockU === 0 ? 0 : sg * lockU, innerDeg: inner, outerDeg: outer, jointAngleDeg: jointDeg, limitedBy: reason };
 }
 
 /** Envelope values go out rounded to 1e-4 (degrees) to keep the result compact; null where unsolved. */

@@ -94,3 +94,33 @@ export function rootFirstCrossing(f: (x: number) => number, xs: ArrayLike<number
   }
   return null;
 }
+
+/**
+ * Illinois (modified regula falsi) refinement of a bracket [lo, hi] with f(lo) < 0 ≤ f(hi) (either order
+ * of abscissae). Returns the final bracket, narrowed below tol, so a caller can take the side it needs —
+ * e.g. the last point still inside a limit. Returns null when the ends do not bracket a sign change.
+ */
+export function rootBracketIllinois(f: (x: number) => number, lo: number, hi: number, tol = 1e-10, maxIter = 200): { readonly lo: number; readonly hi: number } | null {
+  let fl = f(lo);
+  let fh = f(hi);
+  if (!(fl < 0 && fh >= 0)) return null;
+  let side = 0;
+  for (let i = 0; i < maxIter && Math.abs(hi - lo) > tol; i++) {
+    let x = (lo * fh - hi * fl) / (fh - fl);
+    // Keep the trial strictly inside; fall back to bisection if rounding put it on an end.
+    if (!(x > Math.min(lo, hi) && x < Math.max(lo, hi))) x = 0.5 * (lo + hi);
+    const fx = f(x);
+    if (fx < 0) {
+      lo = x;
+      fl = fx;
+      if (side === -1) fh /= 2;
+      side = -1;
+    } else {
+      hi = x;
+      fh = fx;
+      if (side === 1) fl /= 2;
+      side = 1;
+    }
+  }
+  return { lo, hi };
+}
