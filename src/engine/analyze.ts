@@ -274,7 +274,7 @@ function lockReachesAt(row: CornerRow, sg: number, u: number, ctx: Context, scra
 
 /**
  * Rack u in [lo, hi] where the joint angle reaches limitDeg: the inside end of an Illinois bracket
- * narrowed to 1e-10 mm, so the reported lock never passes the limit.
+ * narrowed to 1e-8 mm of rack (≈ 1e-6° of steer), so the reported lock never passes the limit.
  */
 function lockJointRoot(row: CornerRow, li: LockInputs, scratch: PointScratch, lo: number, hi: number): number {
   const sg = li.leftTurnSign;
@@ -282,7 +282,7 @@ function lockJointRoot(row: CornerRow, li: LockInputs, scratch: PointScratch, lo
     const v = lockJointAt(row, sg, u, li.ctx, scratch);
     return v === Infinity ? 1 : v - li.jointLimitDeg;
   };
-  const r = rootBracketIllinois(f, lo, hi, 1e-10);
+  const r = rootBracketIllinois(f, lo, hi, 1e-8);
   return r === null ? lo : r.lo;
 }
 
@@ -585,24 +585,44 @@ export function analyzeLayout(layout: KitLayout, options: AnalyzeOptions = {}): 
     strength,
     warnings,
   };
-  assertAllFinite(result, "");
+  assertAllFinite(result);
   return result;
 }
 
-/** The last line of defence: a NaN or Infinity anywhere in a result is a bug reported by name, never sent out. */
-function assertAllFinite(v: unknown, path: string): void {
-  if (typeof v === "number") {
-    if (!Number.isFinite(v)) throw new GeometryError("analysis", `${path || "result"} came out as ${v} (please report this layout)`);
-    return;
-  }
+/** True when a number anywhere under v (the envelope aside, checked as it is built) is NaN or ±Infinity. */
+function hasNonFinite(v: unknown): boolean {
+  if (typeof v === "number") return !Number.isFinite(v);
   if (Array.isArray(v)) {
-    for (let i = 0; i < v.length; i++) assertAllFinite(v[i], path);
-    return;
+    for (let i = 0; i < v.length; i++) if (hasNonFinite(v[i])) return true;
+    return false;
   }
   if (v !== null && typeof v === "object") {
-    for (const k in v) {
-      // The envelope is checked value by value as it is built.
-      if (k !== "envelope") assertAllFinite((v as Record<string, unknown>)[k], path ? `${path}.${k}` : k);
+    const keys = Object.keys(v);
+    for (let i = 0; i < keys.length; i++) if (keys[i] !== "envelope" && hasNonFinite((v as Record<string, unknown>)[keys[i]])) return true;
+  }
+  return false;
+}
+
+/** Dotted path of the first non-finite number under v, for the error message. */
+function nonFinitePath(v: unknown, path: string): string | null {
+  if (typeof v === "number") return Number.isFinite(v) ? null : path;
+  if (Array.isArray(v)) {
+    for (let i = 0; i < v.length; i++) {
+      const p = nonFinitePath(v[i], `${path}[${i}]`);
+      if (p) return p;
+    }
+    return null;
+  }
+  if (v !== null && typeof v === "object") {
+    for (const [k, x] of Object.entries(v)) {
+      const p = k === "envelope" ? null : nonFinitePath(x, path ? `${path}.${k}` : k);
+      if (p) return p;
     }
   }
+  return null;
+}
+
+/** The last line of defence: a NaN or Infinity anywhere in a result is a bug reported by name, never sent out. */
+function assertAllFinite(v: unknown): void {
+  if (hasNonFinite(v)) throw new GeometryError("analysis", `${nonFinitePath(v, "") ?? "result"} came out non-finite (please report this layout)`);
 }

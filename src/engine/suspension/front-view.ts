@@ -189,16 +189,20 @@ export function frontViewPoseAtTravel(m: FrontViewModel, travelMm: number, guess
   const target = m.corner.wheelCentre.z + travelMm;
   let theta = guessLowerArmRad;
   let g = wheelCentreZ(m, theta) - target;
+  // Newton's method with one numeric derivative, then secant updates of the slope (one solve per step).
   const step = 1e-7;
+  let slope = NaN;
   for (let iter = 0; iter < 60 && Number.isFinite(g) && Math.abs(g) > 1e-11; iter++) {
-    let gp = wheelCentreZ(m, theta + step) - target;
-    let h = step;
-    if (!Number.isFinite(gp)) {
-      h = -step;
-      gp = wheelCentreZ(m, theta - step) - target;
+    if (!Number.isFinite(slope) || slope === 0) {
+      let gp = wheelCentreZ(m, theta + step) - target;
+      let h = step;
+      if (!Number.isFinite(gp)) {
+        h = -step;
+        gp = wheelCentreZ(m, theta - step) - target;
+      }
+      slope = (gp - g) / h;
+      if (!Number.isFinite(slope) || slope === 0) break;
     }
-    const slope = (gp - g) / h;
-    if (!Number.isFinite(slope) || slope === 0) break;
     let delta = -g / slope;
     // Cap a step at 0.2 rad and halve it until the linkage still closes.
     if (Math.abs(delta) > 0.2) delta = Math.sign(delta) * 0.2;
@@ -209,6 +213,7 @@ export function frontViewPoseAtTravel(m: FrontViewModel, travelMm: number, guess
       delta /= 2;
     }
     if (!Number.isFinite(next)) break;
+    slope = (next - g) / delta;
     theta += delta;
     g = next;
   }
