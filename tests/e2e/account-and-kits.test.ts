@@ -52,3 +52,29 @@ describe("a new designer", () => {
     expect(page.url()).toMatch(/\/sign-in/);
   });
 });
+
+describe("a kit's analysis sheet", () => {
+  it("shows steer lock, what limits it and the shaft safety factor for a new kit's starting layout", async () => {
+    const page = await browser.newPage();
+    await page.goto("/sign-up");
+    await page.getByLabel("Name").fill("Orla Brandt");
+    await page.getByLabel("E-mail").fill(`orla-${randomUUID().slice(0, 8)}@test.example`);
+    await page.getByLabel("Password").fill("steer-lock-42");
+    await page.getByRole("button", { name: "Create account" }).click();
+    await page.waitForURL(/\/workspaces\/[^/]+\/kits$/);
+    await page.getByLabel("Name").fill("Heron corner");
+    await page.getByRole("button", { name: "Create kit" }).click();
+    await page.getByRole("link", { name: "Heron corner" }).click();
+    await page.waitForURL(/\/kits\/[0-9a-f-]{36}$/);
+
+    const lock = page.getByRole("region", { name: "Steer lock" });
+    await lock.getByText("Limited by").waitFor();
+    const lockText = await lock.innerText();
+    expect(lockText).toMatch(/\d+\.\d°/);
+    expect(lockText).not.toMatch(/NaN|Infinity|undefined/);
+    const strength = page.getByRole("region", { name: "Shaft strength at the neck" });
+    expect(await strength.innerText()).toMatch(/Safety factor\s+\d+\.\d\d/);
+    await page.getByRole("table", { name: "Neck diameter what-if" }).waitFor();
+    await page.getByText("Cautions").first().waitFor();
+  });
+});

@@ -1,5 +1,6 @@
 "use client";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
+import Link from "next/link";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { api, ApiError } from "@/lib/api-client";
@@ -67,7 +68,7 @@ export function KitRow({ kit, workspaceId, canWrite }: { kit: KitSummary; worksp
             <Button type="button" variant="ghost" onClick={() => { setDraft(kit.name); setEditing(false); }}>Cancel</Button>
           </form>
         ) : (
-          <p className="truncate font-medium" data-testid="kit-name">{kit.name}</p>
+          <Link href={`/workspaces/${workspaceId}/kits/${kit.id}`} className="block truncate font-medium hover:text-steel hover:underline" data-testid="kit-name">{kit.name}</Link>
         )}
         {rename.isError ? <p role="alert" className="mt-1 text-xs text-red-700">{rename.error.message}</p> : null}
         {remove.isError ? <p role="alert" className="mt-1 text-xs text-red-700">{remove.error.message}</p> : null}
