@@ -32,7 +32,8 @@ export default defineConfig({
           include: ["tests/api/**/*.test.ts", "tests/server/**/*.test.ts"],
           fileParallelism: false,
           // Production keeps the auth rate limit on; so do these tests (and one of them checks it).
-          env: { KB_AUTH_RATE_LIMIT: "on" },
+          // The analysis routes run their layouts in a worker thread here too (TypeScript loaded by tsx).
+          env: { KB_AUTH_RATE_LIMIT: "on", KB_ANALYSIS_WORKERS: "1", KB_ANALYSIS_WORKER_TSX: "1" },
           testTimeout: 30_000,
           hookTimeout: 60_000,
         },

@@ -1,8 +1,8 @@
 import { randomUUID } from "node:crypto";
 import { describe, expect, it } from "vitest";
-import { useBrowser } from "./helpers/browser";
+import { setUpBrowser } from "./helpers/browser";
 
-const browser = useBrowser();
+const browser = setUpBrowser();
 
 describe("a new designer", () => {
   it("signs up, lands in a personal workspace, creates and renames a kit, and is sent to sign-in after signing out", async () => {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { useBrowser } from "./helpers/browser";
+import { setUpBrowser } from "./helpers/browser";
 
-const browser = useBrowser();
+const browser = setUpBrowser();
 
 describe("home page", () => {
   it("answers with the Knucklebench heading", async () => {

@@ -7,6 +7,12 @@ async function readTextCapped(req: Request, limit: number): Promise<string> {
   const declared = Number(req.headers.get("content-length") ?? "NaN");
   if (Number.isFinite(declared) && declared > limit) throw tooLarge(limit);
   if (!req.body) return "";
+  // A declared length within the limit is enforced by the HTTP layer: read it in one go.
+  if (Number.isFinite(declared)) {
+    const text = await req.text();
+    if (Buffer.byteLength(text) > limit) throw tooLarge(limit);
+    return text;
+  }
   const reader = req.body.getReader();
   const chunks: Uint8Array[] = [];
   let size = 0;

@@ -2,7 +2,7 @@
 // browser per test file, a fresh browser context (own cookies) per page, and a screenshot of every
 // open page into .data/e2e-shots when a test fails.
 //
-//   const browser = useBrowser();            // at the top of a test file: registers the hooks
+//   const browser = setUpBrowser();            // at the top of a test file: registers the hooks
 //   const page = await browser.newPage();    // inside a test; page.goto("/kits") is relative to the app
 import { mkdirSync } from "node:fs";
 import { join } from "node:path";
@@ -34,7 +34,7 @@ export interface BrowserHarness {
   newPage(): Promise<Page>;
 }
 
-export function useBrowser(): BrowserHarness {
+export function setUpBrowser(): BrowserHarness {
   let browser: Browser | undefined;
   let contexts: BrowserContext[] = [];
 

@@ -1,6 +1,6 @@
 import { kitAnalyzeBody } from "@/contracts/analyze";
 import { kitIdParam } from "@/contracts/kits";
-import { analyzeDocument } from "@/server/data/analysis";
+import { analysisResponse } from "@/server/analysis/pool";
 import { getKit } from "@/server/data/kits";
 import { readJson } from "@/server/http/body";
 import { notFound } from "@/server/http/errors";
@@ -15,5 +15,5 @@ export const POST = workspaceRoute<Params, "kit">("kit", "read", async (req, acc
   const hasBody = req.headers.get("content-length") !== "0" && req.body !== null;
   const { grid } = hasBody ? await readJson(req, kitAnalyzeBody) : { grid: undefined };
   const kit = await getKit(access.workspace.id, id.data);
-  return Response.json({ kitId: kit.id, version: kit.version, analysis: analyzeDocument(kit.layout, grid) });
+  return analysisResponse({ layout: kit.layout, grid, envelope: { kitId: kit.id, version: kit.version } });
 });
