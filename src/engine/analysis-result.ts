@@ -116,6 +116,8 @@ export interface AnalysisResult {
   readonly resultSchema: 1;
   readonly grid: { readonly travelSteps: number; readonly steerSteps: number };
   readonly travel: readonly TravelStepResult[];
+  /** The same figures at ride height (travel 0), whether or not the grid has a step there. */
+  readonly atStatic: TravelStepResult;
   readonly steerAxis: SteerAxisResult;
   readonly steering: {
     /** +1 when a rack move to +y turns the car left, −1 when it turns it right. */

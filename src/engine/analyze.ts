@@ -407,6 +407,30 @@ export function analyzeLayout(layout: KitLayout, options: AnalyzeOptions = {}): 
   const jointLimitDeg = Math.min(cupLimit.limitDeg, drive.ratedAngleDeg);
   const lockInputs: LockInputs = { racks, leftTurnSign, rackTravelMm: rackTravel, jointLimitDeg, jointLimitBy, ctx };
 
+  // One travel position's figures, rack centred (also used for the static position itself).
+  const travelStepResult = (row: CornerRow, pose: FrontViewPose): TravelStepResult => {
+    if (!evalPoint(row, 0, ctx, scratch)) throw new GeometryError("tie rod", `cannot reach the steering arm with the rack centred at ${describeTravel(pose.travelMm)}`);
+    const sa = steerAxisFigures(row.axis, [0, pose.wheelCentre[0], pose.wheelCentre[1]], [row.wx, row.wy, row.wz], [0, pose.contactPatch[0], pose.contactPatch[1]]);
+    return {
+      travelMm: pose.travelMm,
+      lowerArmAngleDeg: pose.lowerArmAngleDeg,
+      upperArmAngleDeg: pose.upperArmAngleDeg,
+      camberDeg: pose.camberDeg,
+      camberGainDegPerMm: pose.camberGainDegPerMm,
+      trackChangeMm: pose.trackChangeMm,
+      contactPatchYMm: pose.contactPatch[0],
+      contactPatchZMm: pose.contactPatch[1],
+      instantCentreYMm: pose.instantCentre ? pose.instantCentre[0] : null,
+      instantCentreZMm: pose.instantCentre ? pose.instantCentre[1] : null,
+      rollCentreHeightMm: pose.rollCentreHeightMm,
+      kingpinInclinationDeg: sa.kingpinInclinationDeg,
+      scrubRadiusMm: sa.scrubRadiusMm,
+      bumpSteerDeg: scratch.roadDeg,
+      plungeMm: scratch.shaftMm - shaftStaticMm,
+      jointAngleDeg: scratch.jointDeg,
+    };
+  };
+
   // The envelope: one row per travel step.
   const travelOut: TravelStepResult[] = [];
   const perTravel: SteerLockResult[] = [];
@@ -447,26 +471,7 @@ export function analyzeLayout(layout: KitLayout, options: AnalyzeOptions = {}): 
     if (lock.jointAngleDeg > maxWithin) maxWithin = lock.jointAngleDeg;
     envJoint.push(jRow);
     envRoad.push(rRow);
-    if (!evalPoint(row, 0, ctx, scratch)) throw new GeometryError("tie rod", `cannot reach the steering arm with the rack centred at ${describeTravel(pose.travelMm)}`);
-    const sa = steerAxisFigures(row.axis, [0, pose.wheelCentre[0], pose.wheelCentre[1]], [row.wx, row.wy, row.wz], [0, pose.contactPatch[0], pose.contactPatch[1]]);
-    travelOut.push({
-      travelMm: pose.travelMm,
-      lowerArmAngleDeg: pose.lowerArmAngleDeg,
-      upperArmAngleDeg: pose.upperArmAngleDeg,
-      camberDeg: pose.camberDeg,
-      camberGainDegPerMm: pose.camberGainDegPerMm,
-      trackChangeMm: pose.trackChangeMm,
-      contactPatchYMm: pose.contactPatch[0],
-      contactPatchZMm: pose.contactPatch[1],
-      instantCentreYMm: pose.instantCentre ? pose.instantCentre[0] : null,
-      instantCentreZMm: pose.instantCentre ? pose.instantCentre[1] : null,
-      rollCentreHeightMm: pose.rollCentreHeightMm,
-      kingpinInclinationDeg: sa.kingpinInclinationDeg,
-      scrubRadiusMm: sa.scrubRadiusMm,
-      bumpSteerDeg: scratch.roadDeg,
-      plungeMm: scratch.shaftMm - shaftStaticMm,
-      jointAngleDeg: scratch.jointDeg,
-    });
+    travelOut.push(travelStepResult(row, pose));
   }
 
   // Steering sweep at static ride height.
@@ -537,6 +542,7 @@ export function analyzeLayout(layout: KitLayout, options: AnalyzeOptions = {}): 
     resultSchema: 1,
     grid: { travelSteps: nT, steerSteps: nS },
     travel: travelOut,
+    atStatic: travelStepResult(staticRow, staticPose),
     steerAxis: {
       kingpinInclinationDeg: staticFigures.kingpinInclinationDeg,
       casterDeg: staticFigures.casterDeg,

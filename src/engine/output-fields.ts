@@ -16,6 +16,7 @@ const STEER = "knuckle rotated about the kingpin axis by Rodrigues' formula; tie
 const ACK = "REFERENCES §2.2 (Jazar ch. 7 [M], Milliken ch. 19 [M])";
 
 export const OUTPUT_FIELDS: readonly OutputField[] = [
+  { path: "atStatic", unit: "—", sign: "every travel[] figure at ride height (travel 0)", source: "as travel[]" },
   { path: "travel[].travelMm", unit: "mm", sign: "+ bump (wheel centre up relative to the body), − droop", source: "input grid" },
   { path: "travel[].lowerArmAngleDeg", unit: "°", sign: "+ outer end higher than inner, front view", source: FV },
   { path: "travel[].upperArmAngleDeg", unit: "°", sign: "+ outer end higher than inner, front view", source: FV },

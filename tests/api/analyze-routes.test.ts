@@ -34,8 +34,8 @@ describe("POST /api/analyze", () => {
     expect(a.steerLock.worst.innerDeg).toBeGreaterThan(10);
     expect(["neck-contact", "slot-limit", "rated-angle", "linkage", "rack-travel"]).toContain(a.steerLock.worst.limitedBy);
     expect(a.drive.maxJointAngleWithinLockDeg).toBeLessThanOrEqual(a.drive.jointLimitDeg + 1e-6);
-    type Step = { travelMm: number };
-    const statik = a.travel.reduce((best: Step, t: Step) => (Math.abs(t.travelMm) < Math.abs(best.travelMm) ? t : best));
+    const statik = a.atStatic;
+    expect(statik.travelMm).toBe(0);
     expect(Number.isFinite(statik.camberGainDegPerMm)).toBe(true);
     expect(Number.isFinite(statik.rollCentreHeightMm)).toBe(true);
     expect(Number.isFinite(a.ackermann.atLockPct)).toBe(true);

@@ -232,3 +232,28 @@ describe("properties over random layouts near the demo (fast-check)", () => {
     );
   });
 });
+
+describe("figures at ride height", () => {
+  it("atStatic is the travel-0 row of a grid that has one, and reproduces the input's static camber", () => {
+    // droop 10 mm, bump 14 mm: 13 steps of 2 mm put one step exactly on 0.
+    const a = analyzeLayout(TARNWICK_10_BASE, { travelSteps: 13, steerSteps: 9 });
+    const row = a.travel.find((t) => Math.abs(t.travelMm) < 1e-12);
+    expect(row).toBeDefined();
+    expect(a.atStatic.travelMm).toBe(0);
+    for (const key of Object.keys(row!) as (keyof typeof row)[]) {
+      const v = a.atStatic[key!] as number | null;
+      const w = row![key!] as number | null;
+      if (v === null || w === null) expect(v).toBe(w);
+      else expectNear(v, w, 1e-9);
+    }
+    // Input echo (common practice): the static pose is the layout itself, so its camber is the static camber.
+    expectNear(a.atStatic.camberDeg, TARNWICK_10_BASE.frontView.staticCamberDeg, DEG_TOL);
+  });
+
+  it("exists for a grid without a step at 0", () => {
+    const a = analyzeLayout(TARNWICK_10_BASE, { travelSteps: 2, steerSteps: 3 });
+    expect(a.travel.map((t) => t.travelMm)).toEqual([-10, 14]);
+    expect(a.atStatic.travelMm).toBe(0);
+    expect(Number.isFinite(a.atStatic.rollCentreHeightMm ?? Number.NaN)).toBe(true);
+  });
+});

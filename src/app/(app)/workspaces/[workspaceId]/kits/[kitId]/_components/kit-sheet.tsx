@@ -72,7 +72,7 @@ export function KitSheet({ workspaceId, kitId }: Props) {
 }
 
 function AnalysisView({ a }: { a: AnalysisResult }) {
-  const statik = a.travel.reduce((best, t) => (Math.abs(t.travelMm) < Math.abs(best.travelMm) ? t : best));
+  const statik = a.atStatic;
   const s = a.strength;
   return (
     <div className="flex flex-col gap-6">
