@@ -35,3 +35,19 @@ export type KitPatchBody = z.infer<typeof kitPatchBody>;
 export const kitIdParam = z.string().uuid("Kit id must be a UUID");
 
 export { version as versionField };
+
+/** A kit as the API lists it (dates as ISO strings). */
+export type KitSummary = {
+  id: string;
+  name: string;
+  scale: string;
+  notes: string;
+  version: number;
+  createdBy: string | null;
+  createdByName: string | null;
+  createdAt: string;
+  updatedAt: string;
+};
+
+/** A kit with its layout document, as GET /api/workspaces/{w}/kits/{k} returns it. */
+export type KitDetail = KitSummary & { workspaceId: string; layout: unknown };

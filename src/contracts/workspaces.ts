@@ -16,3 +16,9 @@ export const memberRoleBody = z.object({ role }).strict();
 export const workspaceCreateBody = z
   .object({ name: z.string({ error: "Name is required" }).trim().min(1, "Name is required").max(80, "Name must be at most 80 characters") })
   .strict();
+
+/** One of the caller's workspaces, with the caller's role in it. */
+export type WorkspaceSummary = { id: string; name: string; slug: string; role: string };
+
+/** A member row as the members API returns it (dates as ISO strings). */
+export type MemberRow = { id: string; userId: string; name: string; email: string; role: string; createdAt: string };

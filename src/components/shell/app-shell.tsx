@@ -1,5 +1,5 @@
 import Link from "next/link";
-import type { WorkspaceSummary } from "@/lib/types";
+import type { WorkspaceSummary } from "@/contracts/workspaces";
 import { SignOutButton } from "./sign-out-button";
 import { WorkspaceSwitcher } from "./workspace-switcher";
 

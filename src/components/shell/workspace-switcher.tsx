@@ -3,7 +3,7 @@ import Link from "next/link";
 import { useParams, useRouter } from "next/navigation";
 import { useTransition } from "react";
 import { api } from "@/lib/api-client";
-import type { WorkspaceSummary } from "@/lib/types";
+import type { WorkspaceSummary } from "@/contracts/workspaces";
 
 export function WorkspaceSwitcher({ workspaces, activeWorkspaceId }: { workspaces: WorkspaceSummary[]; activeWorkspaceId: string | null }) {
   const router = useRouter();

@@ -1,22 +1,10 @@
 import "server-only";
 import { and, desc, eq } from "drizzle-orm";
-import type { KitCreateFields } from "@/contracts/kits";
+import type { KitCreateFields, KitDetail, KitSummary } from "@/contracts/kits";
 import { db } from "../db/client";
 import { kits, users } from "../db/schema";
 import { HttpError, notFound } from "../http/errors";
 
-export type KitSummary = {
-  id: string;
-  name: string;
-  scale: string;
-  notes: string;
-  version: number;
-  createdBy: string | null;
-  createdByName: string | null;
-  createdAt: string;
-  updatedAt: string;
-};
-export type KitDetail = KitSummary & { workspaceId: string; layout: unknown };
 
 const summaryColumns = {
   id: kits.id,

@@ -2,12 +2,11 @@ import "server-only";
 import { randomUUID } from "node:crypto";
 import { and, asc, eq, sql } from "drizzle-orm";
 import type { WorkspaceRole } from "@/contracts/roles";
+import type { MemberRow, WorkspaceSummary } from "@/contracts/workspaces";
 import { db } from "../db/client";
 import { members, sessions, users, workspaces } from "../db/schema";
 import { HttpError } from "../http/errors";
 
-export type WorkspaceSummary = { id: string; name: string; slug: string; role: string };
-export type MemberRow = { id: string; userId: string; name: string; email: string; role: string; createdAt: string };
 
 function slugFrom(name: string): string {
   const base = name.toLowerCase().normalize("NFKD").replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "").slice(0, 40) || "workspace";

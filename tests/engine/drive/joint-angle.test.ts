@@ -1,5 +1,6 @@
 import fc from "fast-check";
 import { Quaternion, Vector3 } from "three";
+import { expectGeometryError } from "../near";
 import { describe, expect, it } from "vitest";
 import { GeometryError } from "@/engine/errors";
 import {
@@ -10,16 +11,6 @@ import {
 
 const ANGLE_TOL_DEG = 1e-3;
 
-function expectGeometryError(fn: () => unknown, part: string): void {
-  try {
-    fn();
-  } catch (error) {
-    expect(error).toBeInstanceOf(GeometryError);
-    expect((error as GeometryError).part).toBe(part);
-    return;
-  }
-  throw new Error("expected a GeometryError");
-}
 
 describe("joint angle from shaft inclination and steer — REFERENCES §1.5 check cases (derived [D])", () => {
   it.each([

@@ -1,5 +1,6 @@
 import fc from "fast-check";
 import { Quaternion, Vector3 } from "three";
+import { expectGeometryError } from "../near";
 import { describe, expect, it } from "vitest";
 import { GeometryError } from "@/engine/errors";
 import {
@@ -14,16 +15,6 @@ import {
 const ANGLE_TOL_DEG = 1e-3; // ±0.001°, REFERENCES' suggested tolerance for angles
 const deg = (rad: number) => (rad * 180) / Math.PI;
 
-function expectGeometryError(fn: () => unknown, part: string): void {
-  try {
-    fn();
-  } catch (error) {
-    expect(error).toBeInstanceOf(GeometryError);
-    expect((error as GeometryError).part).toBe(part);
-    return;
-  }
-  throw new Error("expected a GeometryError");
-}
 
 /**
  * Independent method: the neck as a ray from the pivot, tilted by β in a plane at azimuth φ with three.js

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { allowableShear, shearYieldFromTensileMpa } from "@/engine/strength/allowable";
 import { MATERIALS, materialById, type PrintedFigure } from "@/engine/strength/materials";
-import { expectGeometryError, expectRelClose } from "./helpers";
+import { expectGeometryError, expectRelClose } from "../near";
 
 describe("shear yield S_sy = S_y/√3 — Shigley 9th ed. §5-5 eq. (5-21) [F, via REFERENCES §6.1]; check cases §6.3", () => {
   it("S_y 655 → S_y/√3 = 378.16 MPa, Tresca 0.5·S_y = 327.50 MPa", () => {

@@ -2,7 +2,7 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { GeometryError } from "@/engine/errors";
 import { MATERIALS, analyzeStrength, materialById, type StrengthInput } from "@/engine/strength";
-import { expectGeometryError, expectRelClose } from "./helpers";
+import { expectGeometryError, expectRelClose } from "../near";
 
 const base: StrengthInput = {
   motor: { kind: "kv", kvRpmPerV: 4000, currentA: 80 },

@@ -7,7 +7,7 @@ import {
   shaftTorqueNmm,
   torqueConstantNmPerA,
 } from "@/engine/strength/torque-chain";
-import { expectGeometryError, expectRelClose } from "./helpers";
+import { expectGeometryError, expectRelClose } from "../near";
 
 describe("torque constant K_t = 60/(2π K_v) — Wikipedia 'Motor constants' [F, via REFERENCES §6.2]; check cases REFERENCES §6.3", () => {
   it.each([

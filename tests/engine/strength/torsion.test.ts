@@ -7,7 +7,7 @@ import {
   twistAngleDeg,
   twistAngleRad,
 } from "@/engine/strength/torsion";
-import { expectGeometryError, expectRelClose } from "./helpers";
+import { expectGeometryError, expectRelClose } from "../near";
 
 describe("torsional shear τ = 16T/(πd³), hollow 16TD/(π(D⁴−d⁴)) — amesweb torsion page [F, via REFERENCES §6.1]; check cases §6.3", () => {
   it.each([

@@ -7,9 +7,8 @@ import type { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { TextField } from "@/components/ui/field";
 import { ErrorNotice } from "@/components/ui/notice";
-import { workspaceCreateBody } from "@/contracts/workspaces";
+import { workspaceCreateBody, type WorkspaceSummary } from "@/contracts/workspaces";
 import { api } from "@/lib/api-client";
-import type { WorkspaceSummary } from "@/lib/types";
 
 type Fields = z.infer<typeof workspaceCreateBody>;
 

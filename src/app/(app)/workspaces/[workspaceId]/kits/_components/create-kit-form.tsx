@@ -5,10 +5,9 @@ import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { SelectField, TextAreaField, TextField } from "@/components/ui/field";
 import { ErrorNotice } from "@/components/ui/notice";
-import { KIT_SCALES, kitCreateFields, type KitCreateFields } from "@/contracts/kits";
+import { KIT_SCALES, kitCreateFields, type KitCreateFields, type KitDetail } from "@/contracts/kits";
 import { api, ApiError } from "@/lib/api-client";
 import { queryKeys } from "@/lib/query-keys";
-import type { KitDetail } from "@/lib/types";
 
 export function CreateKitForm({ workspaceId }: { workspaceId: string }) {
   const queryClient = useQueryClient();

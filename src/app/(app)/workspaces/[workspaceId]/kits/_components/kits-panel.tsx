@@ -4,7 +4,7 @@ import { Spinner } from "@/components/ui/button";
 import { EmptyState, ErrorNotice } from "@/components/ui/notice";
 import { api } from "@/lib/api-client";
 import { queryKeys } from "@/lib/query-keys";
-import type { KitSummary } from "@/lib/types";
+import type { KitSummary } from "@/contracts/kits";
 import { CreateKitForm } from "./create-kit-form";
 import { KitRow } from "./kit-row";
 

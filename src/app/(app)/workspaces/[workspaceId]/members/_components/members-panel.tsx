@@ -6,10 +6,9 @@ import { Button, Spinner } from "@/components/ui/button";
 import { SelectField, TextField } from "@/components/ui/field";
 import { ErrorNotice } from "@/components/ui/notice";
 import { ROLE_DESCRIPTIONS, WORKSPACE_ROLES } from "@/contracts/roles";
-import { memberAddBody, type MemberAddBody } from "@/contracts/workspaces";
+import { memberAddBody, type MemberAddBody, type MemberRow } from "@/contracts/workspaces";
 import { api, ApiError } from "@/lib/api-client";
 import { queryKeys } from "@/lib/query-keys";
-import type { MemberRow } from "@/lib/types";
 
 type Props = { workspaceId: string; workspaceName: string; myUserId: string; myRole: string; canManage: boolean };
 

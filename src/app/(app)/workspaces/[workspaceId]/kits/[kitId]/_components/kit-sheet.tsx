@@ -7,7 +7,7 @@ import type { AnalysisResult } from "@/engine";
 import { api } from "@/lib/api-client";
 import { fmt, limitLabel, signed } from "@/lib/format";
 import { queryKeys } from "@/lib/query-keys";
-import type { KitDetail } from "@/lib/types";
+import type { KitDetail } from "@/contracts/kits";
 import { JointAngleChart, SteerLockChart, TravelChart } from "./kit-charts";
 
 type Props = { workspaceId: string; kitId: string };
