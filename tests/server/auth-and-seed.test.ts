@@ -3,7 +3,9 @@ import { describe, expect, it } from "vitest";
 import { db } from "@/server/db/client";
 import { kits, members, users, workspaces } from "@/server/db/schema";
 import { DEMO_PASSWORD, DEMO_PEOPLE, DEMO_WORKSPACE, seedDemo } from "@/server/data/demo-seed";
-import { randomClientIp, signIn, signUp, uniqueEmail } from "../helpers/api";
+import { POST as authPost } from "@/app/api/auth/[...all]/route";
+import * as workspacesRoute from "@/app/api/workspaces/route";
+import { BASE, call, randomClientIp, signIn, signUp, uniqueEmail } from "../helpers/api";
 
 describe("sign-in", () => {
   it("accepts the right password and refuses a wrong one without saying which part was wrong", async () => {
@@ -52,5 +54,16 @@ describe("demo seed", () => {
     await seedDemo();
     const res = await signIn(DEMO_PEOPLE[0]!.email, DEMO_PASSWORD, { "x-forwarded-for": "203.0.113.99" });
     expect(res.status).toBe(200);
+  });
+});
+
+describe("signing out", () => {
+  it("ends the session at once: the same cookie gets 401 on the next call", async () => {
+    const u = await signUp("Ilse Marro");
+    expect((await call(workspacesRoute.GET, "GET", "/api/workspaces", {}, { cookie: u.cookie })).status).toBe(200);
+    const out = await authPost(new Request(`${BASE}/api/auth/sign-out`, { method: "POST", headers: { cookie: u.cookie, origin: new URL(BASE).origin } }));
+    expect(out.status).toBe(200);
+    const after = await call(workspacesRoute.GET, "GET", "/api/workspaces", {}, { cookie: u.cookie });
+    expect(after.status).toBe(401);
   });
 });

@@ -37,8 +37,9 @@ export const auth = betterAuth({
     },
   }),
   emailAndPassword: { enabled: true, minPasswordLength: 8, maxPasswordLength: 128, autoSignIn: true },
-  // The signed cookie cache spares a database read per request; a revoked session lapses within a minute.
-  session: { expiresIn: 60 * 60 * 24 * 14, updateAge: 60 * 60 * 24, cookieCache: { enabled: true, maxAge: 60 } },
+  // No signed cookie cache: it would let a signed-out session be replayed for its whole max-age. The guard's
+  // short per-instance memo (src/server/data/guard.ts) saves the database read instead.
+  session: { expiresIn: 60 * 60 * 24 * 14, updateAge: 60 * 60 * 24 },
   rateLimit: {
     // On in production by default; KB_AUTH_RATE_LIMIT forces it either way (tests switch it on).
     enabled: env.KB_AUTH_RATE_LIMIT ? env.KB_AUTH_RATE_LIMIT === "on" : env.NODE_ENV === "production",

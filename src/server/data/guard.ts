@@ -11,9 +11,9 @@ export type SessionUser = { id: string; name: string; email: string };
 export type Signed = { user: SessionUser; sessionId: string; activeWorkspaceId: string | null };
 export type WorkspaceAccess = Signed & { workspace: { id: string; name: string; slug: string }; role: string };
 
-// Resolving a session through better-auth costs about a millisecond even with its signed cookie cache,
-// which is most of a small API call. Remember the answer per session token briefly; better-auth's own
-// cookie cache already lets a revoked session live up to 60 s, so 10 s here loosens nothing.
+// Resolving a session through better-auth costs a database read and about a millisecond, most of a small
+// API call. Remember the answer per session token for 10 s on this instance; signing out forgets it here at
+// once, and a session revoked elsewhere stops working within those 10 s.
 const SESSION_MEMO_MS = 10_000;
 const SESSION_MEMO_MAX = 5_000;
 const sessionMemo = new Map<string, { signed: Signed; until: number }>();
