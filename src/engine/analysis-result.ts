@@ -3,6 +3,7 @@
  * Nmm, Mpa); signs follow DESIGN.md and are listed field by field in OUTPUT_FIELDS (output-fields.ts).
  * Plain JSON: numbers are always finite; a figure that does not exist at a point is null, never NaN.
  */
+import type { SteerAxisFigures } from "./steering/steer-axis";
 import type { StrengthResult } from "./strength/index";
 import type { JointType } from "./kit-layout";
 
@@ -59,16 +60,8 @@ export interface SteerLockResult {
   readonly limitedBy: SteerLimitReason;
 }
 
-export interface SteerAxisResult {
-  readonly kingpinInclinationDeg: number;
-  readonly casterDeg: number;
-  readonly scrubRadiusMm: number;
-  readonly casterTrailMm: number;
-  readonly hubOffsetMm: number;
-  readonly spindleLengthMm: number;
-  readonly spindleOffsetMm: number;
-  readonly kingpinTrackMm: number;
-}
+/** The static steer-axis figures (documented field by field on SteerAxisFigures) plus the kingpin track. */
+export type SteerAxisResult = Omit<SteerAxisFigures, "groundPoint"> & { readonly kingpinTrackMm: number };
 
 export interface DriveResult {
   readonly jointType: JointType;
