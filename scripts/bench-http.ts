@@ -26,14 +26,14 @@ async function signUp(): Promise<string> {
   return res.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
 }
 
-type Run = { rps: number; p50: number; p99: number; non2xx: number; errors: number; total: number };
+type Run = { rps: number; p50: number; p99: number; non2xx: number; errors: number };
 
 type Target = { path: string; method?: "GET" | "POST"; headers?: Record<string, string>; body?: string };
 
 async function load(title: string, target: Target): Promise<Run> {
   const { path, ...rest } = target;
   const r = await autocannon({ url: base + path, connections, duration: seconds, ...rest });
-  const run = { rps: r.requests.average, p50: r.latency.p50, p99: r.latency.p99, non2xx: r.non2xx, errors: r.errors, total: r.requests.total };
+  const run = { rps: r.requests.average, p50: r.latency.p50, p99: r.latency.p99, non2xx: r.non2xx, errors: r.errors };
   console.log(`  ${title.padEnd(40)} ${run.rps.toFixed(0).padStart(6)} req/s   p50 ${run.p50} ms   p99 ${run.p99} ms   non-2xx ${run.non2xx}   errors ${run.errors}`);
   return run;
 }

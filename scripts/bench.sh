@@ -5,15 +5,8 @@
 #     127.0.0.1:3200 with its own throwaway database (.data/pg-bench on 54349), stopped afterwards.
 set -euo pipefail
 
-# shellcheck source=scripts/lib/common.sh
-source "$(dirname "$0")/lib/common.sh"
-# shellcheck source=scripts/lib/env.sh
-source "$KB_ROOT/scripts/lib/env.sh"
-# shellcheck source=scripts/lib/pg.sh
-source "$KB_ROOT/scripts/lib/pg.sh"
-# shellcheck source=scripts/lib/app.sh
-source "$KB_ROOT/scripts/lib/app.sh"
-cd "$KB_ROOT"
+# shellcheck source=scripts/lib/runner.sh
+source "$(dirname "$0")/lib/runner.sh"
 
 # shellcheck disable=SC2317 # runs from the trap
 cleanup() {

@@ -5,15 +5,8 @@
 # and the database. DATABASE_URL, when set, points the demo at that database instead.
 set -euo pipefail
 
-# shellcheck source=scripts/lib/common.sh
-source "$(dirname "$0")/lib/common.sh"
-# shellcheck source=scripts/lib/env.sh
-source "$KB_ROOT/scripts/lib/env.sh"
-# shellcheck source=scripts/lib/pg.sh
-source "$KB_ROOT/scripts/lib/pg.sh"
-# shellcheck source=scripts/lib/app.sh
-source "$KB_ROOT/scripts/lib/app.sh"
-cd "$KB_ROOT"
+# shellcheck source=scripts/lib/runner.sh
+source "$(dirname "$0")/lib/runner.sh"
 
 APP_PORT=3000
 PG_PORT=54329

@@ -8,15 +8,8 @@
 # purpose: tests write to their database, and must not write to the one the demo or a user set up).
 set -euo pipefail
 
-# shellcheck source=scripts/lib/common.sh
-source "$(dirname "$0")/lib/common.sh"
-# shellcheck source=scripts/lib/env.sh
-source "$KB_ROOT/scripts/lib/env.sh"
-# shellcheck source=scripts/lib/pg.sh
-source "$KB_ROOT/scripts/lib/pg.sh"
-# shellcheck source=scripts/lib/app.sh
-source "$KB_ROOT/scripts/lib/app.sh"
-cd "$KB_ROOT"
+# shellcheck source=scripts/lib/runner.sh
+source "$(dirname "$0")/lib/runner.sh"
 
 CHROMIUM=${CHROMIUM_PATH:-/usr/bin/chromium}
 UNIT_REPORT=.data/vitest.json

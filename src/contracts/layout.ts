@@ -240,6 +240,11 @@ export function parseLayout(doc: unknown): LayoutParseResult {
   };
 }
 
+/** Layout issues as request-body field issues, their paths under `prefix` (at most 50). */
+export function layoutFieldIssues(issues: readonly LayoutIssue[], prefix = "layout"): { path: string; message: string }[] {
+  return issues.slice(0, 50).map((i) => ({ path: i.path ? `${prefix}.${i.path}` : prefix, message: i.message }));
+}
+
 /** JSON Schema (draft 2020-12) of the latest layout document, for GET /api/layout-schema. */
 export function layoutJsonSchema(): Record<string, unknown> {
   return z.toJSONSchema(layoutObjectSchema, { target: "draft-2020-12" }) as Record<string, unknown>;

@@ -10,7 +10,8 @@ export function fmt(value: number | null | undefined, digits = 1, unit = ""): st
 export function signed(value: number | null | undefined, digits = 1, unit = ""): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return "—";
   const s = fmt(value, digits, unit);
-  return value > 0 && !s.startsWith("0.0") ? `+${s}` : s;
+  // A value that rounds to zero gets no sign.
+  return Number(value.toFixed(digits)) > 0 ? `+${s}` : s;
 }
 
 const LIMIT_LABELS: Record<string, string> = {

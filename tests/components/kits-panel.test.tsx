@@ -64,7 +64,7 @@ describe("kits panel", () => {
     vi.stubGlobal("fetch", fetchMock);
     renderPanel();
     await userEvent.click(await screen.findByRole("button", { name: "Rename Tern front" }));
-    const input = screen.getByLabelText("New name for Tern front");
+    expect(screen.getByLabelText("New name for Tern front")).toBeTruthy();
     await userEvent.keyboard("{Escape}");
     expect(screen.queryByLabelText("New name for Tern front")).toBeNull();
     await userEvent.click(screen.getByRole("button", { name: "Rename Tern front" }));
@@ -74,7 +74,6 @@ describe("kits panel", () => {
     const patch = fetchMock.mock.calls.find(([, i]) => i?.method === "PATCH")!;
     expect(patch[0]).toBe("/api/workspaces/ws1/kits/k1");
     expect(JSON.parse(String(patch[1]!.body))).toEqual({ version: 3, name: "Tern front B" });
-    expect(input).toBeTruthy();
   });
 
   it("hides the write controls from a viewer", async () => {

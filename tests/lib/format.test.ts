@@ -13,6 +13,8 @@ describe("readout formatting", () => {
     expect(fmt(-0.04, 1, "mm")).toBe("0.0 mm");
     expect(signed(1.25, 2, "mm")).toBe("+1.25 mm");
     expect(signed(-1.25, 2, "mm")).toBe("-1.25 mm");
+    expect(signed(0.05, 2, "mm")).toBe("+0.05 mm");
+    expect(signed(0.004, 2, "mm")).toBe("0.00 mm");
   });
   it("names what limits steer lock in words", () => {
     expect(limitLabel("neck-contact")).toBe("shaft neck meets the cup mouth");

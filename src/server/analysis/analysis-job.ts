@@ -1,6 +1,6 @@
 // One analysis request as plain data in and out, so it can run in a worker thread or inline.
 import type { AnalyzeGrid } from "@/contracts/analyze";
-import { parseLayout } from "@/contracts/layout";
+import { layoutFieldIssues, parseLayout } from "@/contracts/layout";
 import { analyzeLayout, GeometryError } from "@/engine";
 
 export type AnalysisJob = { readonly layout: unknown; readonly grid?: AnalyzeGrid; readonly envelope?: Record<string, unknown> };
@@ -13,7 +13,7 @@ export type AnalysisOutcome =
 export function runAnalysisJob(job: AnalysisJob): AnalysisOutcome {
   const parsed = parseLayout(job.layout);
   if (!parsed.ok) {
-    const fields = parsed.issues.slice(0, 50).map((i) => ({ path: i.path ? `layout.${i.path}` : "layout", message: i.message }));
+    const fields = layoutFieldIssues(parsed.issues);
     return { ok: false, status: 422, code: "invalid", message: `Invalid layout: ${fields[0]!.path}: ${fields[0]!.message}`, fields };
   }
   try {

@@ -5,7 +5,7 @@ import { organization } from "better-auth/plugins/organization";
 import { db } from "../db/client";
 import * as schema from "../db/schema";
 import { authSecret, env } from "../env";
-import { firstWorkspaceIdOf, createPersonalWorkspace } from "../data/workspaces";
+import { createPersonalWorkspace } from "../data/workspaces";
 import { ac, roles } from "./access";
 
 function trustedOrigins(): string[] {
@@ -66,15 +66,6 @@ export const auth = betterAuth({
         // Every new designer starts with a workspace of their own.
         after: async (user) => {
           await createPersonalWorkspace({ id: user.id, name: user.name });
-        },
-      },
-    },
-    session: {
-      create: {
-        before: async (session) => {
-          const active = (session as { activeOrganizationId?: string | null }).activeOrganizationId;
-          if (active) return { data: session };
-          return { data: { ...session, activeOrganizationId: await firstWorkspaceIdOf(session.userId) } };
         },
       },
     },

@@ -52,8 +52,8 @@ export async function requireSession(headers: Headers): Promise<Signed> {
 }
 
 /**
- * The workspace a session opens by default. The sign-up session is created before the personal
- * workspace exists, so an unset one is settled (and stored) on first use.
+ * The workspace a session opens by default: the one chosen last, else the first the user joined (stored
+ * on first use, since the sign-up session is created before the personal workspace exists).
  */
 export async function resolveActiveWorkspace(signed: Signed): Promise<string | null> {
   if (signed.activeWorkspaceId) return signed.activeWorkspaceId;
@@ -72,6 +72,7 @@ export async function chooseActiveWorkspace(headers: Headers, signed: Signed, wo
 }
 
 const WORKSPACE_ID = /^[A-Za-z0-9_-]{1,64}$/;
+const notAMember = () => new HttpError(403, "not_a_member", "You are not a member of this workspace.");
 
 /**
  * The session plus the caller's membership of `workspaceId`, checked against one permission.
@@ -84,14 +85,14 @@ export async function requireWorkspaceAccess<R extends Resource>(
   action: Action<R>,
 ): Promise<WorkspaceAccess> {
   const signed = await requireSession(headers);
-  if (!WORKSPACE_ID.test(workspaceId)) throw new HttpError(403, "not_a_member", "You are not a member of this workspace.");
+  if (!WORKSPACE_ID.test(workspaceId)) throw notAMember();
   const [row] = await db
     .select({ role: members.role, id: workspaces.id, name: workspaces.name, slug: workspaces.slug })
     .from(members)
     .innerJoin(workspaces, eq(workspaces.id, members.organizationId))
     .where(and(eq(members.organizationId, workspaceId), eq(members.userId, signed.user.id)))
     .limit(1);
-  if (!row) throw new HttpError(403, "not_a_member", "You are not a member of this workspace.");
+  if (!row) throw notAMember();
   if (!roleCan(row.role, resource, action)) {
     throw forbidden(`A ${row.role} of this workspace may not ${action} ${resource === "organization" ? "the workspace" : `${resource}s`}.`);
   }

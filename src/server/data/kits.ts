@@ -1,6 +1,6 @@
 import "server-only";
 import { and, desc, eq } from "drizzle-orm";
-import type { KitCreateFields, KitDetail, KitSummary } from "@/contracts/kits";
+import { kitIdParam, type KitCreateFields, type KitDetail, type KitSummary } from "@/contracts/kits";
 import { db } from "../db/client";
 import { kits, users } from "../db/schema";
 import { HttpError, notFound } from "../http/errors";
@@ -20,6 +20,13 @@ const summaryColumns = {
 
 type SummaryRow = { createdAt: Date; updatedAt: Date } & Omit<KitSummary, "createdAt" | "updatedAt">;
 const toSummary = <T extends SummaryRow>(r: T) => ({ ...r, createdAt: r.createdAt.toISOString(), updatedAt: r.updatedAt.toISOString() });
+
+/** A kit id from the URL; a malformed one is simply a kit that is not there (404, never a database error). */
+export function kitIdOrNotFound(raw: string): string {
+  const parsed = kitIdParam.safeParse(raw);
+  if (!parsed.success) throw notFound("Kit");
+  return parsed.data;
+}
 
 export async function listKits(workspaceId: string): Promise<KitSummary[]> {
   const rows = await db

@@ -1,14 +1,14 @@
 import "server-only";
 import { z } from "zod";
 import { DEMO_LAYOUTS } from "@/contracts/demo-layouts";
-import { parseLayout, upgradeLayout, type Layout } from "@/contracts/layout";
+import { layoutFieldIssues, parseLayout, upgradeLayout, type Layout } from "@/contracts/layout";
 import { HttpError } from "../http/errors";
 
 /** Validates a layout sent by a client (any known schema version; upgraded to the latest). 422 names each field. */
 export function requireValidLayout(doc: unknown, prefix = "layout"): Layout {
   const parsed = parseLayout(doc);
   if (parsed.ok) return parsed.layout;
-  const fields = parsed.issues.slice(0, 50).map((i) => ({ path: i.path ? `${prefix}.${i.path}` : prefix, message: i.message }));
+  const fields = layoutFieldIssues(parsed.issues, prefix);
   throw new HttpError(422, "invalid", `Invalid layout: ${fields[0]!.path}: ${fields[0]!.message}`, fields);
 }
 

@@ -16,16 +16,23 @@ export function toErrorResponse(error: unknown): Response {
   return errorResponse(new HttpError(500, "internal", "Something went wrong on our side; nothing was changed."));
 }
 
-/** A route for any signed-in user. */
-export function sessionRoute<P>(handler: (req: Request, signed: Signed, params: P) => Promise<Response>) {
+/** The one place a handler's errors become JSON responses. */
+function handled<P>(run: (req: Request, params: P) => Promise<Response>) {
   return async (req: Request, ctx: RouteContext<P>): Promise<Response> => {
     try {
-      const signed = await requireSession(req.headers);
-      return await handler(req, signed, await ctx.params);
+      return await run(req, await ctx.params);
     } catch (error) {
       return toErrorResponse(error);
     }
   };
+}
+
+/** A route open to anyone (schema documents, health). Still never answers a raw 500. */
+export const publicRoute = handled;
+
+/** A route for any signed-in user. */
+export function sessionRoute<P>(handler: (req: Request, signed: Signed, params: P) => Promise<Response>) {
+  return handled<P>(async (req, params) => handler(req, await requireSession(req.headers), params));
 }
 
 /** A route under /api/workspaces/[workspaceId]/…: session, membership and role checked before the body runs. */
@@ -34,24 +41,7 @@ export function workspaceRoute<P extends { workspaceId: string }, R extends Reso
   action: Action<R>,
   handler: (req: Request, access: WorkspaceAccess, params: P) => Promise<Response>,
 ) {
-  return async (req: Request, ctx: RouteContext<P>): Promise<Response> => {
-    try {
-      const params = await ctx.params;
-      const access = await requireWorkspaceAccess(req.headers, params.workspaceId, resource, action);
-      return await handler(req, access, params);
-    } catch (error) {
-      return toErrorResponse(error);
-    }
-  };
-}
-
-/** A route open to anyone (schema documents, health). Still never answers a raw 500. */
-export function publicRoute<P>(handler: (req: Request, params: P) => Promise<Response>) {
-  return async (req: Request, ctx: RouteContext<P>): Promise<Response> => {
-    try {
-      return await handler(req, await ctx.params);
-    } catch (error) {
-      return toErrorResponse(error);
-    }
-  };
+  return handled<P>(async (req, params) =>
+    handler(req, await requireWorkspaceAccess(req.headers, params.workspaceId, resource, action), params),
+  );
 }

@@ -2,68 +2,67 @@
 import { CartesianGrid, Legend, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import type { SteerLockResult, SteerStepResult, TravelStepResult } from "@/engine";
 
-function Frame({ title, children }: { title: string; children: React.ReactElement }) {
+type Series = { key: string; name: string; colour: string; axis?: "right" };
+type Row = Record<string, number | null>;
+
+const round = (v: number | null, d = 3) => (v === null ? null : Number(v.toFixed(d)));
+
+/** One line chart of a readout table: x along `xKey` in `xUnit`, a line per series, an optional limit line. */
+function ReadoutChart({ title, data, xKey, xUnit, yUnit, rightUnit, series, limit }: {
+  title: string;
+  data: Row[];
+  xKey: string;
+  xUnit: string;
+  yUnit: string;
+  rightUnit?: string;
+  series: Series[];
+  limit?: number;
+}) {
   return (
     <figure className="rounded-lg border border-ink/10 bg-white p-3">
       <figcaption className="mb-2 text-sm font-medium">{title}</figcaption>
       <div className="h-56">
-        <ResponsiveContainer width="100%" height="100%">{children}</ResponsiveContainer>
+        <ResponsiveContainer width="100%" height="100%">
+          <LineChart data={data} margin={{ left: -10, right: 8 }}>
+            <CartesianGrid strokeDasharray="3 3" stroke="#0001" />
+            <XAxis dataKey={xKey} type="number" domain={["dataMin", "dataMax"]} unit={xUnit} fontSize={11} />
+            <YAxis yAxisId="left" fontSize={11} unit={yUnit} />
+            {rightUnit ? <YAxis yAxisId="right" orientation="right" fontSize={11} unit={rightUnit} /> : null}
+            <Tooltip />
+            <Legend wrapperStyle={{ fontSize: 11 }} />
+            {limit !== undefined ? (
+              <ReferenceLine yAxisId="left" y={Number(limit.toFixed(2))} stroke="#b91c1c" strokeDasharray="4 3" label={{ value: "limit", fontSize: 10, fill: "#b91c1c" }} />
+            ) : null}
+            {series.map((s) => (
+              <Line key={s.key} yAxisId={s.axis ?? "left"} type="monotone" dataKey={s.key} name={s.name} stroke={s.colour} dot={false} isAnimationActive={false} />
+            ))}
+          </LineChart>
+        </ResponsiveContainer>
       </div>
     </figure>
   );
 }
 
-const round = (v: number | null, d = 3) => (v === null ? null : Number(v.toFixed(d)));
-
 export function TravelChart({ travel }: { travel: readonly TravelStepResult[] }) {
   const data = travel.map((t) => ({ travel: round(t.travelMm, 1), camber: round(t.camberDeg), rc: round(t.rollCentreHeightMm, 2) }));
   return (
-    <Frame title="Camber and roll centre over travel">
-      <LineChart data={data} margin={{ left: -10, right: 8 }}>
-        <CartesianGrid strokeDasharray="3 3" stroke="#0001" />
-        <XAxis dataKey="travel" type="number" domain={["dataMin", "dataMax"]} unit=" mm" fontSize={11} />
-        <YAxis yAxisId="c" fontSize={11} unit="°" />
-        <YAxis yAxisId="r" orientation="right" fontSize={11} unit=" mm" />
-        <Tooltip />
-        <Legend wrapperStyle={{ fontSize: 11 }} />
-        <Line yAxisId="c" type="monotone" dataKey="camber" name="camber °" stroke="#3d5a73" dot={false} isAnimationActive={false} />
-        <Line yAxisId="r" type="monotone" dataKey="rc" name="roll centre mm" stroke="#c2410c" dot={false} isAnimationActive={false} connectNulls={false} />
-      </LineChart>
-    </Frame>
+    <ReadoutChart title="Camber and roll centre over travel" data={data} xKey="travel" xUnit=" mm" yUnit="°" rightUnit=" mm"
+      series={[{ key: "camber", name: "camber °", colour: "#3d5a73" }, { key: "rc", name: "roll centre mm", colour: "#c2410c", axis: "right" }]} />
   );
 }
 
 export function SteerLockChart({ perTravel }: { perTravel: readonly SteerLockResult[] }) {
   const data = perTravel.map((l) => ({ travel: round(l.travelMm, 1), inner: round(l.innerDeg, 2), outer: round(l.outerDeg, 2) }));
   return (
-    <Frame title="Steer lock over travel">
-      <LineChart data={data} margin={{ left: -10, right: 8 }}>
-        <CartesianGrid strokeDasharray="3 3" stroke="#0001" />
-        <XAxis dataKey="travel" type="number" domain={["dataMin", "dataMax"]} unit=" mm" fontSize={11} />
-        <YAxis fontSize={11} unit="°" />
-        <Tooltip />
-        <Legend wrapperStyle={{ fontSize: 11 }} />
-        <Line type="monotone" dataKey="inner" name="inner wheel °" stroke="#3d5a73" dot={false} isAnimationActive={false} />
-        <Line type="monotone" dataKey="outer" name="outer wheel °" stroke="#7c9cb5" dot={false} isAnimationActive={false} />
-      </LineChart>
-    </Frame>
+    <ReadoutChart title="Steer lock over travel" data={data} xKey="travel" xUnit=" mm" yUnit="°"
+      series={[{ key: "inner", name: "inner wheel °", colour: "#3d5a73" }, { key: "outer", name: "outer wheel °", colour: "#7c9cb5" }]} />
   );
 }
 
 export function JointAngleChart({ steps, limitDeg }: { steps: readonly SteerStepResult[]; limitDeg: number }) {
   const data = steps.map((s) => ({ rack: round(s.rackMm, 2), left: round(s.leftJointAngleDeg, 2), right: round(s.rightJointAngleDeg, 2) }));
   return (
-    <Frame title="Joint angle over rack travel (static)">
-      <LineChart data={data} margin={{ left: -10, right: 8 }}>
-        <CartesianGrid strokeDasharray="3 3" stroke="#0001" />
-        <XAxis dataKey="rack" type="number" domain={["dataMin", "dataMax"]} unit=" mm" fontSize={11} />
-        <YAxis fontSize={11} unit="°" />
-        <Tooltip />
-        <Legend wrapperStyle={{ fontSize: 11 }} />
-        <ReferenceLine y={Number(limitDeg.toFixed(2))} stroke="#b91c1c" strokeDasharray="4 3" label={{ value: "limit", fontSize: 10, fill: "#b91c1c" }} />
-        <Line type="monotone" dataKey="left" name="left joint °" stroke="#3d5a73" dot={false} isAnimationActive={false} />
-        <Line type="monotone" dataKey="right" name="right joint °" stroke="#c2410c" dot={false} isAnimationActive={false} />
-      </LineChart>
-    </Frame>
+    <ReadoutChart title="Joint angle over rack travel (static)" data={data} xKey="rack" xUnit=" mm" yUnit="°" limit={limitDeg}
+      series={[{ key: "left", name: "left joint °", colour: "#3d5a73" }, { key: "right", name: "right joint °", colour: "#c2410c" }]} />
   );
 }

@@ -1,0 +1,12 @@
+# shellcheck shell=bash
+# What every runner (demo, test, bench) sources first: the helpers, the environments, PostgreSQL and the
+# app lifecycles, then the working directory set to the repo.
+# shellcheck source=scripts/lib/common.sh
+source "$(dirname "${BASH_SOURCE[0]}")/common.sh"
+# shellcheck source=scripts/lib/env.sh
+source "$KB_ROOT/scripts/lib/env.sh"
+# shellcheck source=scripts/lib/pg.sh
+source "$KB_ROOT/scripts/lib/pg.sh"
+# shellcheck source=scripts/lib/app.sh
+source "$KB_ROOT/scripts/lib/app.sh"
+cd "$KB_ROOT"
