@@ -45,6 +45,9 @@ export type KitSummary = {
   version: number;
   createdBy: string | null;
   createdByName: string | null;
+  /** Who wrote the current version (null for a kit written before this was kept, or a deleted account). */
+  updatedBy: string | null;
+  updatedByName: string | null;
   createdAt: string;
   updatedAt: string;
 };

@@ -134,11 +134,16 @@ describe("editor writes, with optimistic locking", () => {
     const e = { cookie: editor.cookie };
     const created = await call<P>(kitsRoute.POST, "POST", kitsPath(ws), { workspaceId: ws }, { ...e, body: { name: "Race copy", scale: "1:10" } });
     const id = created.json.kit.id as string;
-    const first = await call<K>(kitRoute.PATCH, "PATCH", kitPath(ws, id), { workspaceId: ws, kitId: id }, { ...e, body: { version: 1, name: "First tab" } });
+    expect(created.json.kit.updatedByName).toBe("Edda Marsh");
+    // The owner saves first; the editor's stale write is told who got there before it.
+    const first = await call<K>(kitRoute.PATCH, "PATCH", kitPath(ws, id), { workspaceId: ws, kitId: id }, { cookie: owner.cookie, body: { version: 1, name: "First tab" } });
     expect(first.status).toBe(200);
+    expect(first.json.kit.updatedByName).toBe("Wren Castellan");
     const second = await call<K>(kitRoute.PATCH, "PATCH", kitPath(ws, id), { workspaceId: ws, kitId: id }, { ...e, body: { version: 1, name: "Second tab" } });
     expect(second.status).toBe(409);
     expect(second.json.error.currentVersion).toBe(2);
+    expect(second.json.error.updatedByName).toBe("Wren Castellan");
+    expect(second.json.error.message).toContain("by Wren Castellan");
     expect(second.json.error.fields[0].path).toBe("version");
     const stalelayout = await call<K>(layoutRoute.PUT, "PUT", `${kitPath(ws, id)}/layout`, { workspaceId: ws, kitId: id }, { ...e, body: { version: 1, layout: TARNWICK_10_THIN_NECK } });
     expect(stalelayout.status).toBe(409);

@@ -62,7 +62,7 @@ export async function seedDemo(): Promise<{ workspaceId: string; created: number
       .where(and(eq(kits.workspaceId, ws.id), eq(kits.name, kit.name)))
       .limit(1);
     if (exists) continue;
-    await db.insert(kits).values({ workspaceId: ws.id, name: kit.name, scale: kit.scale, notes: kit.notes, layout: kit.layout, createdBy: author });
+    await db.insert(kits).values({ workspaceId: ws.id, name: kit.name, scale: kit.scale, notes: kit.notes, layout: kit.layout, createdBy: author, updatedBy: author });
     created += 1;
   }
   return { workspaceId: ws.id, created };

@@ -1,10 +1,14 @@
 import "server-only";
 import { and, desc, eq } from "drizzle-orm";
+import { alias } from "drizzle-orm/pg-core";
 import { kitIdParam, type KitCreateFields, type KitDetail, type KitSummary } from "@/contracts/kits";
 import { db } from "../db/client";
 import { kits, users } from "../db/schema";
 import { HttpError, notFound } from "../http/errors";
 
+
+// The same users table joined twice: who made the kit and who wrote its current version.
+const editors = alias(users, "editors");
 
 const summaryColumns = {
   id: kits.id,
@@ -14,6 +18,8 @@ const summaryColumns = {
   version: kits.version,
   createdBy: kits.createdBy,
   createdByName: users.name,
+  updatedBy: kits.updatedBy,
+  updatedByName: editors.name,
   createdAt: kits.createdAt,
   updatedAt: kits.updatedAt,
 };
@@ -33,6 +39,7 @@ export async function listKits(workspaceId: string): Promise<KitSummary[]> {
     .select(summaryColumns)
     .from(kits)
     .leftJoin(users, eq(users.id, kits.createdBy))
+    .leftJoin(editors, eq(editors.id, kits.updatedBy))
     .where(eq(kits.workspaceId, workspaceId))
     .orderBy(desc(kits.updatedAt));
   return rows.map(toSummary);
@@ -44,6 +51,7 @@ export async function getKit(workspaceId: string, kitId: string): Promise<KitDet
     .select({ ...summaryColumns, workspaceId: kits.workspaceId, layout: kits.layout })
     .from(kits)
     .leftJoin(users, eq(users.id, kits.createdBy))
+    .leftJoin(editors, eq(editors.id, kits.updatedBy))
     .where(and(eq(kits.workspaceId, workspaceId), eq(kits.id, kitId)))
     .limit(1);
   if (!row) throw notFound("Kit");
@@ -53,7 +61,7 @@ export async function getKit(workspaceId: string, kitId: string): Promise<KitDet
 export async function createKit(workspaceId: string, userId: string, fields: KitCreateFields, layout: unknown): Promise<KitDetail> {
   const [row] = await db
     .insert(kits)
-    .values({ workspaceId, name: fields.name, scale: fields.scale, notes: fields.notes ?? "", layout, createdBy: userId })
+    .values({ workspaceId, name: fields.name, scale: fields.scale, notes: fields.notes ?? "", layout, createdBy: userId, updatedBy: userId })
     .returning({ id: kits.id });
   return getKit(workspaceId, row!.id);
 }
@@ -65,19 +73,21 @@ export async function createKit(workspaceId: string, userId: string, fields: Kit
 export async function updateKit(
   workspaceId: string,
   kitId: string,
+  userId: string,
   basedOn: number,
   patch: Partial<{ name: string; scale: string; notes: string; layout: unknown }>,
 ): Promise<KitDetail> {
   const updated = await db
     .update(kits)
-    .set({ ...patch, version: basedOn + 1, updatedAt: new Date() })
+    .set({ ...patch, version: basedOn + 1, updatedBy: userId, updatedAt: new Date() })
     .where(and(eq(kits.workspaceId, workspaceId), eq(kits.id, kitId), eq(kits.version, basedOn)))
     .returning({ id: kits.id });
   if (updated.length === 0) {
     const current = await getKit(workspaceId, kitId); // 404 when it is not there at all
-    throw new HttpError(409, "stale_version", `This kit changed since version ${basedOn}; it is now at version ${current.version}. Reload and apply your edit again.`, [
+    const by = current.updatedByName ? ` by ${current.updatedByName}` : "";
+    throw new HttpError(409, "stale_version", `This kit changed since version ${basedOn}; it is now at version ${current.version}${by}. Reload and apply your edit again.`, [
       { path: "version", message: `Stale: the current version is ${current.version}` },
-    ], { currentVersion: current.version });
+    ], { currentVersion: current.version, updatedByName: current.updatedByName, updatedAt: current.updatedAt });
   }
   return getKit(workspaceId, kitId);
 }

@@ -1,2 +1,3 @@
 export * from "./auth";
 export * from "./kits";
+export * from "./preferences";

@@ -14,6 +14,8 @@ export const kits = pgTable(
     // Optimistic locking: every write names the version it was based on and bumps it.
     version: integer("version").notNull().default(1),
     createdBy: text("created_by").references(() => users.id, { onDelete: "set null" }),
+    // Who wrote the current version: a conflicting save names them.
+    updatedBy: text("updated_by").references(() => users.id, { onDelete: "set null" }),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
   },

@@ -14,7 +14,7 @@ export const GET = workspaceRoute<Params, "kit">("kit", "read", async (_req, acc
 export const PATCH = workspaceRoute<Params, "kit">("kit", "update", async (req, access, params) => {
   const id = kitIdOrNotFound(params.kitId);
   const { version, ...patch } = await readJson(req, kitPatchBody);
-  const kit = await updateKit(access.workspace.id, id, version, patch);
+  const kit = await updateKit(access.workspace.id, id, access.user.id, version, patch);
   return Response.json({ kit: { ...kit, layout: readStoredLayout(kit.layout) } });
 });
 

@@ -12,6 +12,6 @@ const layoutBody = z.object({ version: versionField, layout: incomingLayout }).s
 export const PUT = workspaceRoute<Params, "kit">("kit", "update", async (req, access, params) => {
   const id = kitIdOrNotFound(params.kitId);
   const { version, layout } = await readJson(req, layoutBody);
-  const kit = await updateKit(access.workspace.id, id, version, { layout: requireValidLayout(layout) });
+  const kit = await updateKit(access.workspace.id, id, access.user.id, version, { layout: requireValidLayout(layout) });
   return Response.json({ kit: { ...kit, layout: readStoredLayout(kit.layout) } });
 });
