@@ -9,6 +9,7 @@ import { DRIVE_JOINT_TYPES } from "./drive/joint-types";
 import { jointOperatingAngleDeg } from "./drive/joint-angle";
 import { cupArticulationLimit, type CupMouth } from "./drive/neck-contact";
 import { GeometryError } from "./errors";
+import { staticPoints, staticTieRodLengthMm, type StaticPoints } from "./corner-points";
 import type { KitLayout, KitMaterial } from "./kit-layout";
 import { radToDeg } from "./math/angle";
 import { vec3RotateX } from "./math/rotation";
@@ -16,7 +17,7 @@ import { rootBracketIllinois } from "./math/root-find";
 import type { Vec3 } from "./math/vec3";
 import { ackermannInnerReferencePercent, ackermannOuterReferencePercent, ackermannTurnCentrePercent } from "./steering/ackermann";
 import { armBallCircle, rackLinkage, tieRodBranch, tieRodClosure, type RackLinkage } from "./steering/linkage";
-import { kingpinAxisFromBallJoints, spinAxisFromCamberDeg, steerAxisFigures, type KingpinAxis } from "./steering/steer-axis";
+import { steerAxisFigures, type KingpinAxis } from "./steering/steer-axis";
 import { analyzeStrength, materialById, type MaterialFigure, type StrengthResult } from "./strength/index";
 import { frontViewKnucklePoint, frontViewModel, frontViewPoseAtTravel, frontViewSweep, travelSteps, type FrontViewModel, type FrontViewPose } from "./suspension/front-view";
 
@@ -163,33 +164,6 @@ function evalPoint(row: CornerRow, rackMm: number, ctx: Context, out: PointScrat
   out.spinZ = wz;
   out.shaftMm = Math.sqrt(sx * sx + sy * sy + sz * sz);
   return true;
-}
-
-interface StaticPoints {
-  readonly axis: KingpinAxis;
-  readonly armBall: Vec3;
-  readonly rackEnd: Vec3;
-  readonly outboardJoint: Vec3;
-  readonly inboardJoint: Vec3;
-  readonly spinAxis: Vec3;
-  readonly wheelCentre: Vec3;
-}
-
-function staticPoints(layout: KitLayout): StaticPoints {
-  const f = layout.frontView;
-  const t = layout.topView;
-  const d = layout.drive;
-  const axis = kingpinAxisFromBallJoints([f.lowerOuter.y, f.lowerOuter.z], [f.upperOuter.y, f.upperOuter.z], layout.sideView.casterDeg, layout.sideView.casterOffsetMm ?? 0, f.wheelCentre.z);
-  const armZ = t.steeringArmBall.z ?? f.wheelCentre.z;
-  return {
-    axis,
-    armBall: [t.steeringArmBall.x, t.steeringArmBall.y, armZ],
-    rackEnd: [t.rackEnd.x, t.rackEnd.y, t.rackEnd.z ?? armZ],
-    outboardJoint: [d.outboardJoint.x ?? 0, d.outboardJoint.y, d.outboardJoint.z],
-    inboardJoint: [d.inboardJoint.x ?? 0, d.inboardJoint.y, d.inboardJoint.z],
-    spinAxis: spinAxisFromCamberDeg(f.staticCamberDeg),
-    wheelCentre: [0, f.wheelCentre.y, f.wheelCentre.z],
-  };
 }
 
 function describeTravel(travelMm: number): string {
@@ -382,7 +356,7 @@ export function analyzeLayout(layout: KitLayout, options: AnalyzeOptions = {}): 
   }
 
   const pts = staticPoints(layout);
-  const tieRodMm = Math.hypot(pts.armBall[0] - pts.rackEnd[0], pts.armBall[1] - pts.rackEnd[1], pts.armBall[2] - pts.rackEnd[2]);
+  const tieRodMm = staticTieRodLengthMm(pts);
   const branch = tieRodBranch(tieRodClosure(armBallCircle(pts.axis, pts.armBall), pts.rackEnd, tieRodMm));
   const ctx: Context = { ix: pts.inboardJoint[0], iy: pts.inboardJoint[1], iz: pts.inboardJoint[2] };
   const shaftStaticMm = Math.hypot(pts.outboardJoint[0] - ctx.ix, pts.outboardJoint[1] - ctx.iy, pts.outboardJoint[2] - ctx.iz);

@@ -10,3 +10,6 @@ export { GeometryError } from "./errors";
 export { OUTPUT_FIELDS, type OutputField } from "./output-fields";
 export type { Vec3 } from "./math/vec3";
 export type { Vec2 } from "./math/vec2";
+export { cornerPoser, cornerPoseAt, wheelAxesMeet, type CornerPose, type CornerPoser, type WheelPose } from "./corner-pose";
+export { cupArticulationLimit, neckClearanceMm } from "./drive/neck-contact";
+export { MATERIALS } from "./strength/materials";
