@@ -127,6 +127,12 @@ const layoutObjectSchema = z.strictObject({
   strength: strengthSchema,
 });
 
+/**
+ * Every field's type and range, without the checks between fields: what an editor can hold while the
+ * designer works (a neck wider than the mouth is a fault to show on the drawing, not a value to refuse).
+ */
+export const layoutFieldsSchema = layoutObjectSchema;
+
 /** The layout document schema (latest version), with cross-field checks that name the fields involved. */
 export const layoutSchema = layoutObjectSchema.superRefine((l, ctx) => {
   const f = l.frontView;

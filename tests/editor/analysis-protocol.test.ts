@@ -1,0 +1,81 @@
+import { describe, expect, it } from "vitest";
+import { TARNWICK_10_BASE } from "@/contracts/demo-layouts";
+import { analyzeLayout } from "@/engine";
+import { setAt } from "@/editor/document/layout-paths";
+import { createAnalysisClient, type AnalysisPort } from "@/editor/readouts/analysis-client";
+import { ANALYSIS_GRIDS, answerAnalysisRequest, type AnalysisReply, type AnalysisRequest } from "@/editor/readouts/analysis-protocol";
+
+describe("the worker's answer", () => {
+  it("is the engine's own analysis at the requested grid", () => {
+    const reply = answerAnalysisRequest({ type: "analyze", id: 7, quality: "full", layout: TARNWICK_10_BASE });
+    expect(reply.ok).toBe(true);
+    if (!reply.ok) return;
+    expect(reply.id).toBe(7);
+    expect(reply.analysis).toEqual(analyzeLayout(TARNWICK_10_BASE, ANALYSIS_GRIDS.full));
+    const coarse = answerAnalysisRequest({ type: "analyze", id: 8, quality: "coarse", layout: TARNWICK_10_BASE });
+    expect(coarse.ok && coarse.analysis.grid).toEqual(ANALYSIS_GRIDS.coarse);
+  });
+
+  it("names the field for a value out of its range", () => {
+    const reply = answerAnalysisRequest({ type: "analyze", id: 1, quality: "full", layout: setAt(TARNWICK_10_BASE, "drive.neckDiameterMm", -2) });
+    expect(reply.ok).toBe(false);
+    if (reply.ok) return;
+    expect(reply.fault).toMatchObject({ kind: "invalid", path: "drive.neckDiameterMm", part: "neck" });
+    expect(reply.fault.message).toMatch(/drive.neckDiameterMm must be at least 0.3 mm/);
+  });
+
+  it("calls a neck wider than the mouth impossible, on the neck", () => {
+    const reply = answerAnalysisRequest({ type: "analyze", id: 1, quality: "full", layout: setAt(TARNWICK_10_BASE, "drive.neckDiameterMm", 9) });
+    expect(!reply.ok && reply.fault).toMatchObject({ kind: "impossible", part: "neck", path: "drive.neckDiameterMm" });
+  });
+
+  it("calls arms that cannot close impossible, naming the part", () => {
+    // The upper arm pulled far inboard: the upright cannot reach full bump.
+    const layout = setAt(setAt(TARNWICK_10_BASE, "frontView.upperInner.y", 100), "frontView.upperInner.z", 51);
+    const reply = answerAnalysisRequest({ type: "analyze", id: 1, quality: "full", layout });
+    expect(reply.ok).toBe(false);
+    if (reply.ok) return;
+    expect(reply.fault.kind).toBe("impossible");
+    expect(reply.fault.part).not.toBeNull();
+    expect(reply.fault.message).toMatch(/^(front suspension|tie rod|upright|upper arm)/);
+  });
+
+  it("marks a point dragged inboard of its partner on that point's handle", () => {
+    const reply = answerAnalysisRequest({ type: "analyze", id: 1, quality: "coarse", layout: setAt(TARNWICK_10_BASE, "frontView.lowerOuter.y", 20) });
+    expect(!reply.ok && reply.fault).toMatchObject({ kind: "impossible", handleId: "front:lowerOuter", part: "lowerArm" });
+  });
+});
+
+/** The worker's side over a real MessageChannel: the transport differs from a Worker, the protocol does not. */
+function workerOverChannel() {
+  const channel = new MessageChannel();
+  const seen: number[] = [];
+  channel.port2.onmessage = (e: MessageEvent<AnalysisRequest>) => {
+    seen.push(e.data.id);
+    channel.port2.postMessage(answerAnalysisRequest(e.data));
+  };
+  return { port: channel.port1 as unknown as AnalysisPort, seen, close: () => { channel.port1.close(); channel.port2.close(); } };
+}
+
+describe("the client's protocol", () => {
+  it("keeps one request in flight and only the newest waiting one; replies arrive in order", async () => {
+    const w = workerOverChannel();
+    const replies: { reply: AnalysisReply; latest: boolean }[] = [];
+    const done = new Promise<void>((resolve) => {
+      const client = createAnalysisClient(w.port, (reply, latest) => {
+        replies.push({ reply, latest });
+        if (latest) resolve();
+      });
+      for (let i = 0; i < 10; i++) client.request(setAt(TARNWICK_10_BASE, "drive.neckDiameterMm", 5 - i * 0.1), "coarse");
+      expect(client.droppedCount()).toBe(8);
+    });
+    await done;
+    // The first went at once; of the nine that queued behind it only the last survived.
+    expect(w.seen).toEqual([1, 10]);
+    expect(replies.map((r) => r.reply.id)).toEqual([1, 10]);
+    expect(replies.map((r) => r.latest)).toEqual([false, true]);
+    const last = replies[1]!.reply;
+    expect(last.ok && last.analysis.strength.safetyFactor).toBeCloseTo(analyzeLayout(setAt(TARNWICK_10_BASE, "drive.neckDiameterMm", 4.1), ANALYSIS_GRIDS.coarse).strength.safetyFactor, 10);
+    w.close();
+  });
+});
