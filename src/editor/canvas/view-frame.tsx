@@ -1,0 +1,225 @@
+"use client";
+// One view of the corner: a canvas on the millimetre grid with zoom (wheel), pan (drag on empty space),
+// fit, a scale bar, and the handles of its points. Pointer events are read here on the element (not by
+// Konva, whose layers do not listen) and handed to the drag tool; each handle also has a focusable
+// button over it, so Tab moves between handles and the arrow keys nudge the one focused.
+import { useEffect, useMemo, useRef, useState, type ReactNode } from "react";
+import { Circle, Layer, Stage } from "react-konva";
+import { nudgeHandle } from "../commands/edit-commands";
+import { handlePlanePoint, type HandleDef } from "../document/handles";
+import { selectShownLayout } from "../store/editor-store";
+import { useEditor, useEditorStore } from "../store/editor-context";
+import { createHandleDragTool, type PointerInput } from "../tools/handle-drag-tool";
+import { nudgeDelta } from "../tools/snapping";
+import { formatLength } from "../units/length-unit";
+import { INK } from "./drawing-colours";
+import { GridShape } from "./plane-shapes";
+import { useElementSize } from "./use-element-size";
+import { fitBox, panBy, planeToScreen, scaleBarMm, screenToPlane, zoomAt, type PlaneBox, type ScreenPoint, type ViewTransform } from "./view-transform";
+
+const HIT_RADIUS_PX = 10;
+
+export interface ViewFrameProps {
+  readonly id: string;
+  readonly title: string;
+  /** Which way the plane's axes point, in words, for the caption. */
+  readonly axes: string;
+  readonly box: PlaneBox;
+  readonly handles?: readonly HandleDef[];
+  readonly children: (t: ViewTransform, size: { width: number; height: number }) => ReactNode;
+  /** Text shown over the drawing's bottom edge (what binds, what is wrong). */
+  readonly notes?: ReactNode;
+}
+
+export function ViewFrame({ id, title, axes, box, handles = [], children, notes }: ViewFrameProps) {
+  const store = useEditorStore();
+  const layout = useEditor(selectShownLayout);
+  const selected = useEditor((s) => s.selectedHandle);
+  const faultHandle = useEditor((s) => s.live.fault?.handleId ?? null);
+  const readOnly = useEditor((s) => s.readOnly);
+  const gridStepMm = useEditor((s) => s.settings.gridStepMm);
+  const unit = useEditor((s) => s.settings.lengthUnit);
+  const containerRef = useRef<HTMLDivElement>(null);
+  const size = useElementSize(containerRef);
+  const [t, setT] = useState<ViewTransform | null>(null);
+  const [cursor, setCursor] = useState("default");
+  const tool = useMemo(() => createHandleDragTool(store), [store]);
+  const pan = useRef<{ from: ScreenPoint; start: ViewTransform } | null>(null);
+  const [announce, setAnnounce] = useState("");
+
+  const fit = () => size.width > 0 && setT(fitBox(box, size.width, size.height, 28));
+  // Frame the view once it has a size; later resizes keep the user's zoom.
+  useEffect(() => {
+    if (!t && size.width > 0 && size.height > 0) setT(fitBox(box, size.width, size.height, 28));
+  }, [t, size.width, size.height, box]);
+
+  useEffect(() => {
+    const el = containerRef.current;
+    if (!el) return;
+    const onWheel = (e: WheelEvent) => {
+      e.preventDefault();
+      const r = el.getBoundingClientRect();
+      setT((cur) => (cur ? zoomAt(cur, [e.clientX - r.left, e.clientY - r.top], Math.exp(-e.deltaY * 0.0015)) : cur));
+    };
+    el.addEventListener("wheel", onWheel, { passive: false });
+    return () => el.removeEventListener("wheel", onWheel);
+  }, []);
+
+  useEffect(() => {
+    const onKey = (e: KeyboardEvent) => {
+      if (e.key === "Escape" && tool.state().kind !== "idle") tool.cancel();
+    };
+    window.addEventListener("keydown", onKey);
+    return () => window.removeEventListener("keydown", onKey);
+  }, [tool]);
+
+  const screenPoints = t ? handles.map((h) => ({ h, at: planeToScreen(t, handlePlanePoint(layout, h)) })) : [];
+
+  const hit = (p: ScreenPoint): HandleDef | null => {
+    let best: HandleDef | null = null;
+    let bestD = HIT_RADIUS_PX;
+    for (const { h, at } of screenPoints) {
+      const d = Math.hypot(at[0] - p[0], at[1] - p[1]) - (h.id === selected ? 1 : 0);
+      if (d <= bestD) {
+        best = h;
+        bestD = d;
+      }
+    }
+    return best;
+  };
+
+  const input = (e: React.PointerEvent, cur: ViewTransform): PointerInput => {
+    const r = containerRef.current!.getBoundingClientRect();
+    const screen: ScreenPoint = [e.clientX - r.left, e.clientY - r.top];
+    return { screen, plane: screenToPlane(cur, screen), free: e.altKey || e.ctrlKey || e.metaKey };
+  };
+
+  const onPointerDown = (e: React.PointerEvent) => {
+    if (!t || e.button !== 0) return;
+    const p = input(e, t);
+    const h = hit(p.screen);
+    containerRef.current!.setPointerCapture(e.pointerId);
+    if (h) {
+      tool.pointerDown(h.id, p);
+      setCursor(readOnly ? "default" : "grabbing");
+    } else {
+      pan.current = { from: p.screen, start: t };
+      setCursor("move");
+    }
+  };
+  const onPointerMove = (e: React.PointerEvent) => {
+    if (!t) return;
+    const p = input(e, t);
+    if (pan.current) {
+      const { from, start } = pan.current;
+      setT(panBy(start, p.screen[0] - from[0], p.screen[1] - from[1]));
+    } else if (tool.state().kind !== "idle") {
+      tool.pointerMove(p);
+    } else {
+      const over = hit(p.screen);
+      setCursor(over ? (readOnly ? "pointer" : "grab") : "default");
+    }
+  };
+  const end = (cancelled: boolean) => {
+    pan.current = null;
+    if (cancelled) tool.cancel();
+    else tool.pointerUp();
+    setCursor("default");
+  };
+
+  const describe = (h: HandleDef) => {
+    const [u, v] = handlePlanePoint(store.getState().layout, h);
+    const [un, vn] = h.view === "front" ? ["y", "z"] : ["y", "x"];
+    const vv = h.view === "front" ? v : -v;
+    return `${h.label}: ${un} ${formatLength(u, unit)}, ${vn} ${formatLength(vv, unit)}`;
+  };
+
+  const onHandleKey = (h: HandleDef) => (e: React.KeyboardEvent) => {
+    const delta = nudgeDelta(e.key, e.shiftKey, store.getState().settings.gridStepMm);
+    if (!delta) return;
+    e.preventDefault();
+    if (readOnly) {
+      setAnnounce("This kit is read-only for you.");
+      return;
+    }
+    const s = store.getState();
+    s.commit(nudgeHandle(s.layout, h.id, delta[0], delta[1]), { coalesce: `nudge:${h.id}` });
+    setAnnounce(describe(h));
+  };
+
+  const bar = t ? scaleBarMm(t.scale) : 0;
+  return (
+    <section aria-label={title} className="flex h-full min-h-0 flex-col overflow-hidden rounded-md border border-ink/15 bg-white">
+      <header className="flex items-center gap-2 border-b border-ink/10 px-2 py-1">
+        <h3 className="text-xs font-semibold uppercase tracking-wide text-ink/80">{title}</h3>
+        <span className="text-xs text-ink/75">{axes}</span>
+        <span className="ml-auto flex gap-1">
+          <button type="button" className="rounded px-1.5 text-xs text-ink/80 hover:bg-ink/5" aria-label={`Zoom in, ${title}`} onClick={() => t && setT(zoomAt(t, [size.width / 2, size.height / 2], 1.25))}>+</button>
+          <button type="button" className="rounded px-1.5 text-xs text-ink/80 hover:bg-ink/5" aria-label={`Zoom out, ${title}`} onClick={() => t && setT(zoomAt(t, [size.width / 2, size.height / 2], 0.8))}>−</button>
+          <button type="button" className="rounded px-1.5 text-xs text-ink/80 hover:bg-ink/5" onClick={fit}>Fit</button>
+        </span>
+      </header>
+      <div
+        ref={containerRef}
+        data-testid={`view-${id}`}
+        data-scale={t ? t.scale.toFixed(4) : undefined}
+        data-ox={t ? t.ox.toFixed(2) : undefined}
+        data-oy={t ? t.oy.toFixed(2) : undefined}
+        className="relative min-h-0 flex-1 touch-none select-none"
+        style={{ cursor }}
+        onPointerDown={onPointerDown}
+        onPointerMove={onPointerMove}
+        onPointerUp={() => end(false)}
+        onPointerCancel={() => end(true)}
+      >
+        {t && size.width > 0 ? (
+          <Stage width={size.width} height={size.height} listening={false}>
+            <Layer listening={false}>
+              <GridShape t={t} width={size.width} height={size.height} stepMm={gridStepMm} />
+              {children(t, size)}
+            </Layer>
+            <Layer listening={false}>
+              {screenPoints.map(({ h, at }) => {
+                const isSel = h.id === selected;
+                const isFault = h.id === faultHandle;
+                return (
+                  <Circle
+                    key={h.id}
+                    listening={false}
+                    x={at[0]}
+                    y={at[1]}
+                    radius={isSel ? 6.5 : 5}
+                    fill={isSel ? INK.handle : INK.handleFill}
+                    stroke={isFault ? INK.fault : INK.handle}
+                    strokeWidth={isFault ? 3 : 2}
+                  />
+                );
+              })}
+            </Layer>
+          </Stage>
+        ) : null}
+        {screenPoints.map(({ h, at }) => (
+          <button
+            key={h.id}
+            type="button"
+            data-handle={h.id}
+            aria-label={describe(h)}
+            aria-pressed={h.id === selected}
+            className="pointer-events-none absolute h-4 w-4 -translate-x-1/2 -translate-y-1/2 rounded-full opacity-0 focus-visible:opacity-100 focus-visible:outline-2 focus-visible:outline-offset-2 focus-visible:outline-blue-700"
+            style={{ left: at[0], top: at[1] }}
+            onFocus={() => store.getState().select(h.id)}
+            onKeyDown={onHandleKey(h)}
+          />
+        ))}
+        {t ? (
+          <div className="pointer-events-none absolute bottom-1.5 left-2 flex flex-col items-start text-[11px] text-ink/80" aria-hidden="true">
+            <span>{formatLength(bar, unit, bar < 1 ? 2 : 0)}</span>
+            <span className="block h-1.5 border-x-2 border-b-2 border-ink/70" style={{ width: bar * t.scale }} />
+          </div>
+        ) : null}
+        {notes ? <div className="pointer-events-none absolute bottom-1.5 right-2 max-w-[70%] text-right text-xs">{notes}</div> : null}
+        <p className="sr-only" aria-live="polite">{announce}</p>
+      </div>
+    </section>
+  );
+}
