@@ -41,17 +41,26 @@ export function ViewFrame({ id, title, axes, box, handles = [], children, notes 
   const unit = useEditor((s) => s.settings.lengthUnit);
   const containerRef = useRef<HTMLDivElement>(null);
   const size = useElementSize(containerRef);
-  const [t, setT] = useState<ViewTransform | null>(null);
+  // Until the user zooms or pans, the view frames the layout as first shown, at whatever size it has.
+  const [userT, setUserT] = useState<ViewTransform | null>(null);
+  const [firstBox] = useState(box);
+  const t = userT ?? (size.width > 0 && size.height > 0 ? fitBox(firstBox, size.width, size.height, 28) : null);
+  const tRef = useRef(t);
+  useEffect(() => {
+    tRef.current = t;
+  });
+  const setT = (next: ViewTransform | ((cur: ViewTransform) => ViewTransform)) =>
+    setUserT((cur) => {
+      const base = cur ?? tRef.current;
+      if (!base) return cur;
+      return typeof next === "function" ? next(base) : next;
+    });
   const [cursor, setCursor] = useState("default");
   const tool = useMemo(() => createHandleDragTool(store), [store]);
   const pan = useRef<{ from: ScreenPoint; start: ViewTransform } | null>(null);
   const [announce, setAnnounce] = useState("");
 
-  const fit = () => size.width > 0 && setT(fitBox(box, size.width, size.height, 28));
-  // Frame the view once it has a size; later resizes keep the user's zoom.
-  useEffect(() => {
-    if (!t && size.width > 0 && size.height > 0) setT(fitBox(box, size.width, size.height, 28));
-  }, [t, size.width, size.height, box]);
+  const fit = () => size.width > 0 && setUserT(fitBox(box, size.width, size.height, 28));
 
   useEffect(() => {
     const el = containerRef.current;
@@ -59,7 +68,11 @@ export function ViewFrame({ id, title, axes, box, handles = [], children, notes 
     const onWheel = (e: WheelEvent) => {
       e.preventDefault();
       const r = el.getBoundingClientRect();
-      setT((cur) => (cur ? zoomAt(cur, [e.clientX - r.left, e.clientY - r.top], Math.exp(-e.deltaY * 0.0015)) : cur));
+      const at: ScreenPoint = [e.clientX - r.left, e.clientY - r.top];
+      setUserT((cur) => {
+        const base = cur ?? tRef.current;
+        return base ? zoomAt(base, at, Math.exp(-e.deltaY * 0.0015)) : cur;
+      });
     };
     el.addEventListener("wheel", onWheel, { passive: false });
     return () => el.removeEventListener("wheel", onWheel);
