@@ -21,13 +21,13 @@ export function AppShell({
           <Link href="/kits" className="font-semibold tracking-tight text-steel">Knucklebench</Link>
           <WorkspaceSwitcher workspaces={workspaces} activeWorkspaceId={activeWorkspaceId} />
           <div className="ml-auto flex items-center gap-3 text-sm">
-            <span className="text-ink/70" title={user.email}>{user.name}</span>
+            <span className="text-ink-muted" title={user.email}>{user.name}</span>
             <SignOutButton />
           </div>
         </div>
       </header>
       <main className="mx-auto w-full max-w-6xl flex-1 px-4 py-6">{children}</main>
-      <footer className="border-t border-ink/10 px-4 py-3 text-center text-xs text-ink/50">
+      <footer className="border-t border-ink/10 px-4 py-3 text-center text-xs text-ink-muted">
         Strength figures are estimates. A design aid for models — not a sign-off for full-size or road vehicles.
       </footer>
     </div>

@@ -14,7 +14,7 @@ export function EmptyState({ title, children }: { title: string; children?: Reac
   return (
     <div className="rounded-lg border border-dashed border-ink/25 bg-white/60 p-8 text-center">
       <p className="font-medium">{title}</p>
-      {children ? <div className="mt-1 text-sm text-ink/60">{children}</div> : null}
+      {children ? <div className="mt-1 text-sm text-ink-muted">{children}</div> : null}
     </div>
   );
 }

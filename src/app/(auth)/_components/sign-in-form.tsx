@@ -33,7 +33,7 @@ export function SignInForm({ next }: { next?: string }) {
       <TextField id="email" label="E-mail" type="email" autoComplete="email" error={formState.errors.email?.message} {...register("email")} />
       <TextField id="password" label="Password" type="password" autoComplete="current-password" error={formState.errors.password?.message} {...register("password")} />
       <Button type="submit" busy={formState.isSubmitting}>Sign in</Button>
-      <p className="text-sm text-ink/60">
+      <p className="text-sm text-ink-muted">
         New here? <Link className="font-medium text-steel underline" href={next ? `/sign-up?next=${encodeURIComponent(next)}` : "/sign-up"}>Create an account</Link>
       </p>
     </form>

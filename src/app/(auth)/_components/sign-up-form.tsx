@@ -29,13 +29,13 @@ export function SignUpForm({ next }: { next?: string }) {
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
       <h1 className="text-xl font-semibold">Create your account</h1>
-      <p className="text-sm text-ink/60">You get a workspace of your own; collaborators can add you to theirs.</p>
+      <p className="text-sm text-ink-muted">You get a workspace of your own; collaborators can add you to theirs.</p>
       {failure ? <ErrorNotice title="Could not sign up" message={failure} /> : null}
       <TextField id="name" label="Name" autoComplete="name" error={formState.errors.name?.message} {...register("name")} />
       <TextField id="email" label="E-mail" type="email" autoComplete="email" error={formState.errors.email?.message} {...register("email")} />
       <TextField id="password" label="Password" type="password" autoComplete="new-password" hint="At least 8 characters" error={formState.errors.password?.message} {...register("password")} />
       <Button type="submit" busy={formState.isSubmitting}>Create account</Button>
-      <p className="text-sm text-ink/60">
+      <p className="text-sm text-ink-muted">
         Already have an account? <Link className="font-medium text-steel underline" href="/sign-in">Sign in</Link>
       </p>
     </form>

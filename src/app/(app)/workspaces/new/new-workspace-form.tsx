@@ -33,7 +33,7 @@ export function NewWorkspaceForm() {
       })}
     >
       <h1 className="text-lg font-semibold">New workspace</h1>
-      <p className="text-sm text-ink/60">A workspace holds kits and the people who work on them. You will be its owner.</p>
+      <p className="text-sm text-ink-muted">A workspace holds kits and the people who work on them. You will be its owner.</p>
       {failure ? <ErrorNotice title="Could not create the workspace" message={failure} /> : null}
       <TextField id="workspace-name" label="Name" error={formState.errors.name?.message} {...register("name")} />
       <Button type="submit" busy={formState.isSubmitting}>Create workspace</Button>

@@ -72,7 +72,7 @@ export function KitRow({ kit, workspaceId, canWrite }: { kit: KitSummary; worksp
         )}
         {rename.isError ? <p role="alert" className="mt-1 text-xs text-red-700">{rename.error.message}</p> : null}
         {remove.isError ? <p role="alert" className="mt-1 text-xs text-red-700">{remove.error.message}</p> : null}
-        <p className="mt-0.5 text-xs text-ink/55">
+        <p className="mt-0.5 text-xs text-ink-muted">
           {kit.scale} · updated {dateFormat.format(new Date(kit.updatedAt))}
           {kit.createdByName ? ` · by ${kit.createdByName}` : ""} · v{kit.version}
         </p>
@@ -81,9 +81,10 @@ export function KitRow({ kit, workspaceId, canWrite }: { kit: KitSummary; worksp
         <div className="flex gap-2">
           {confirmDelete ? (
             <>
-              <span className="text-sm text-ink/70">Delete this kit?</span>
+              <span className="text-sm text-ink-muted">Delete this kit?</span>
               <Button variant="danger" busy={remove.isPending} onClick={() => remove.mutate()}>Delete</Button>
-              <Button variant="ghost" onClick={() => setConfirmDelete(false)}>Keep</Button>
+              {/* The Delete button that had focus is gone: focus the safe choice. */}
+              <Button variant="ghost" autoFocus onClick={() => setConfirmDelete(false)}>Keep</Button>
             </>
           ) : (
             <>

@@ -18,11 +18,11 @@ export function KitsPanel({ workspaceId, workspaceName, canWrite }: { workspaceI
     <div className="grid gap-6 lg:grid-cols-[1fr_20rem]">
       <section aria-labelledby="kits-heading">
         <div className="mb-3 flex items-baseline justify-between">
-          <h1 id="kits-heading" className="text-xl font-semibold">Kits <span className="font-normal text-ink/50">in {workspaceName}</span></h1>
+          <h1 id="kits-heading" className="text-xl font-semibold">Kits <span className="font-normal text-ink-muted">in {workspaceName}</span></h1>
           {kits.isFetching && !kits.isPending ? <Spinner label="Refreshing" /> : null}
         </div>
         {kits.isPending ? (
-          <div className="rounded-lg border border-ink/10 bg-white p-6 text-sm text-ink/60"><Spinner label="Loading kits…" /></div>
+          <div className="rounded-lg border border-ink/10 bg-white p-6 text-sm text-ink-muted"><Spinner label="Loading kits…" /></div>
         ) : kits.isError ? (
           <ErrorNotice title="Could not load the kits" message={kits.error.message} onRetry={() => kits.refetch()} />
         ) : kits.data.length === 0 ? (
@@ -42,7 +42,7 @@ export function KitsPanel({ workspaceId, workspaceName, canWrite }: { workspaceI
           <CreateKitForm workspaceId={workspaceId} />
         </aside>
       ) : (
-        <aside className="h-fit rounded-lg border border-ink/10 bg-white p-4 text-sm text-ink/60">
+        <aside className="h-fit rounded-lg border border-ink/10 bg-white p-4 text-sm text-ink-muted">
           You can read this workspace&apos;s kits. Ask an admin for the editor role to create or change them.
         </aside>
       )}

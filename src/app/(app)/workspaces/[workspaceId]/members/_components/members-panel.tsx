@@ -33,7 +33,7 @@ export function MembersPanel({ workspaceId, workspaceName, myUserId, myRole, can
   return (
     <div className="grid gap-6 lg:grid-cols-[1fr_20rem]">
       <section aria-labelledby="members-heading">
-        <h1 id="members-heading" className="mb-3 text-xl font-semibold">Members <span className="font-normal text-ink/50">of {workspaceName}</span></h1>
+        <h1 id="members-heading" className="mb-3 text-xl font-semibold">Members <span className="font-normal text-ink-muted">of {workspaceName}</span></h1>
         {changeRole.isError ? <ErrorNotice title="Could not change the role" message={changeRole.error.message} /> : null}
         {remove.isError ? <ErrorNotice title="Could not remove the member" message={remove.error.message} /> : null}
         {members.isPending ? (
@@ -42,14 +42,14 @@ export function MembersPanel({ workspaceId, workspaceName, myUserId, myRole, can
           <ErrorNotice title="Could not load the members" message={members.error.message} onRetry={() => members.refetch()} />
         ) : (
           <table className="w-full overflow-hidden rounded-lg border border-ink/10 bg-white text-sm">
-            <thead className="bg-ink/5 text-left text-xs uppercase tracking-wide text-ink/60">
+            <thead className="bg-ink/5 text-left text-xs uppercase tracking-wide text-ink-muted">
               <tr><th className="px-3 py-2">Name</th><th className="px-3 py-2">E-mail</th><th className="px-3 py-2">Role</th><th className="px-3 py-2"><span className="sr-only">Actions</span></th></tr>
             </thead>
             <tbody className="divide-y divide-ink/10">
               {members.data.map((m) => (
                 <tr key={m.id}>
-                  <td className="px-3 py-2 font-medium">{m.name}{m.userId === myUserId ? <span className="ml-1 text-ink/50">(you)</span> : null}</td>
-                  <td className="px-3 py-2 text-ink/70">{m.email}</td>
+                  <td className="px-3 py-2 font-medium">{m.name}{m.userId === myUserId ? <span className="ml-1 text-ink-muted">(you)</span> : null}</td>
+                  <td className="px-3 py-2 text-ink-muted">{m.email}</td>
                   <td className="px-3 py-2">
                     {canManage && m.userId !== myUserId && (m.role !== "owner" || myRole === "owner") ? (
                       <select
@@ -75,7 +75,7 @@ export function MembersPanel({ workspaceId, workspaceName, myUserId, myRole, can
             </tbody>
           </table>
         )}
-        <dl className="mt-4 grid gap-1 text-xs text-ink/60">
+        <dl className="mt-4 grid gap-1 text-xs text-ink-muted">
           {WORKSPACE_ROLES.map((r) => <div key={r}><dt className="inline font-medium">{r}: </dt><dd className="inline">{ROLE_DESCRIPTIONS[r]}</dd></div>)}
         </dl>
       </section>
@@ -103,7 +103,7 @@ function AddMemberForm({ workspaceId, roles, onAdded }: { workspaceId: string; r
     <aside className="h-fit rounded-lg border border-ink/10 bg-white p-4">
       <form onSubmit={handleSubmit((v) => add.mutate(v))} noValidate className="flex flex-col gap-3" aria-label="Add member">
         <h2 className="font-semibold">Add a member</h2>
-        <p className="text-xs text-ink/60">They need an account already. Invitations by e-mail come later.</p>
+        <p className="text-xs text-ink-muted">They need an account already. Invitations by e-mail come later.</p>
         {add.isError && !(add.error instanceof ApiError && add.error.fields.length) ? <ErrorNotice title="Could not add" message={add.error.message} /> : null}
         <TextField id="member-email" label="E-mail" type="email" error={formState.errors.email?.message} {...register("email")} />
         <SelectField id="member-role" label="Role" error={formState.errors.role?.message} {...register("role")}>

@@ -16,9 +16,9 @@ function Figure({ label, value, hint, tone }: { label: string; value: string; hi
   const colour = tone === "bad" ? "text-red-700" : tone === "good" ? "text-emerald-700" : "text-ink";
   return (
     <div className="rounded-md border border-ink/10 bg-white px-3 py-2">
-      <dt className="text-xs text-ink/60">{label}</dt>
+      <dt className="text-xs text-ink-muted">{label}</dt>
       <dd className={`text-lg font-semibold tabular-nums ${colour}`}>{value}</dd>
-      {hint ? <dd className="text-xs text-ink/55">{hint}</dd> : null}
+      {hint ? <dd className="text-xs text-ink-muted">{hint}</dd> : null}
     </div>
   );
 }
@@ -26,7 +26,7 @@ function Figure({ label, value, hint, tone }: { label: string; value: string; hi
 function Section({ title, children }: { title: string; children: React.ReactNode }) {
   return (
     <section aria-label={title} className="flex flex-col gap-2">
-      <h2 className="text-sm font-semibold uppercase tracking-wide text-ink/60">{title}</h2>
+      <h2 className="text-sm font-semibold uppercase tracking-wide text-ink-muted">{title}</h2>
       <dl className="grid grid-cols-2 gap-2 sm:grid-cols-3">{children}</dl>
     </section>
   );
@@ -53,7 +53,7 @@ export function KitSheet({ workspaceId, kitId }: Props) {
       <div>
         <Link href={`/workspaces/${workspaceId}/kits`} className="text-sm text-steel hover:underline">← All kits</Link>
         <h1 className="mt-1 text-2xl font-semibold">{kit.data.name}</h1>
-        <p className="text-sm text-ink/60">{kit.data.scale} · version {kit.data.version}{kit.data.createdByName ? ` · by ${kit.data.createdByName}` : ""}</p>
+        <p className="text-sm text-ink-muted">{kit.data.scale} · version {kit.data.version}{kit.data.createdByName ? ` · by ${kit.data.createdByName}` : ""}</p>
         {kit.data.notes ? <p className="mt-2 max-w-3xl text-sm">{kit.data.notes}</p> : null}
       </div>
       {analysis.isPending ? (
@@ -119,8 +119,8 @@ function AnalysisView({ a }: { a: AnalysisResult }) {
         <JointAngleChart steps={a.steering.steps} limitDeg={a.drive.jointLimitDeg} />
       </div>
       <table className="w-full max-w-xl rounded-lg border border-ink/10 bg-white text-sm" aria-label="Neck diameter what-if">
-        <caption className="mb-1 text-left text-sm font-semibold uppercase tracking-wide text-ink/60">Neck diameter what-if</caption>
-        <thead className="bg-ink/5 text-left text-xs text-ink/60"><tr><th className="px-3 py-1.5">Neck</th><th className="px-3 py-1.5">Shear</th><th className="px-3 py-1.5">Safety factor</th></tr></thead>
+        <caption className="mb-1 text-left text-sm font-semibold uppercase tracking-wide text-ink-muted">Neck diameter what-if</caption>
+        <thead className="bg-ink/5 text-left text-xs text-ink-muted"><tr><th className="px-3 py-1.5">Neck</th><th className="px-3 py-1.5">Shear</th><th className="px-3 py-1.5">Safety factor</th></tr></thead>
         <tbody className="divide-y divide-ink/10 tabular-nums">
           {s.neckWhatIf.map((w) => (
             <tr key={w.neckDiameterMm}>

@@ -1,0 +1,223 @@
+// Every page the app has passes axe-core's WCAG 2 A/AA rules with no serious or critical violation,
+// in each state a person meets it in (empty, filled, with validation errors). Results and screenshots
+// land in .data/e2e-axe/ and .data/e2e-shots/.
+import { randomUUID } from "node:crypto";
+import type { Page } from "playwright-core";
+import { beforeAll, describe, expect, it } from "vitest";
+import { blockingViolations, expectAccessible } from "./helpers/a11y";
+import { baseUrl, setUpBrowser } from "./helpers/browser";
+
+const browser = setUpBrowser();
+
+type Account = { name: string; email: string; cookies: { name: string; value: string }[] };
+
+// Test set-up goes through the public API; only the pages under check are driven in the browser.
+async function signUpByApi(name: string): Promise<Account> {
+  const email = `${name.split(" ")[0].toLowerCase()}-${randomUUID().slice(0, 8)}@test.example`;
+  const res = await fetch(`${baseUrl}/api/auth/sign-up/email`, {
+    method: "POST",
+    headers: { "content-type": "application/json", origin: baseUrl },
+    body: JSON.stringify({ name, email, password: "steer-lock-42" }),
+  });
+  if (res.status !== 200) throw new Error(`sign-up of ${email} failed: ${res.status} ${await res.text()}`);
+  const cookies = res.headers.getSetCookie().map((c) => {
+    const [pair] = c.split(";");
+    const at = pair.indexOf("=");
+    return { name: pair.slice(0, at), value: pair.slice(at + 1) };
+  });
+  return { name, email, cookies };
+}
+
+async function apiAs<T>(account: Account, path: string, init: { method?: string; body?: unknown } = {}): Promise<T> {
+  const res = await fetch(`${baseUrl}${path}`, {
+    method: init.method ?? "GET",
+    headers: {
+      cookie: account.cookies.map((c) => `${c.name}=${c.value}`).join("; "),
+      origin: baseUrl,
+      ...(init.body === undefined ? {} : { "content-type": "application/json" }),
+    },
+    body: init.body === undefined ? undefined : JSON.stringify(init.body),
+  });
+  if (!res.ok) throw new Error(`${init.method ?? "GET"} ${path} answered ${res.status}: ${await res.text()}`);
+  return (await res.json()) as T;
+}
+
+async function pageAs(account: Account): Promise<Page> {
+  const page = await browser.newPage();
+  await page.context().addCookies(account.cookies.map((c) => ({ ...c, url: baseUrl })));
+  return page;
+}
+
+describe("the accessibility check itself", () => {
+  it("fails on grey text that does not reach 4.5:1 and names the rule, the impact and the element", async () => {
+    const page = await browser.newPage();
+    await page.setContent(
+      `<!doctype html><html lang="en"><head><title>Contrast probe</title></head><body><main><h1>Probe</h1>` +
+        `<p id="faint" style="color:#999;background:#fff">Hint text at 2.8:1</p></main></body></html>`,
+    );
+    const failure = await expectAccessible(page, { name: "probe-low-contrast" }).then(
+      () => null,
+      (error: Error) => error,
+    );
+    expect(failure?.message).toMatch(/\[serious\] color-contrast/);
+    expect(failure?.message).toContain("#faint");
+    expect(failure?.message).toMatch(/contrast of 2\.8/);
+  });
+
+  it("passes the same text once it reaches 4.5:1", async () => {
+    const page = await browser.newPage();
+    await page.setContent(
+      `<!doctype html><html lang="en"><head><title>Contrast probe</title></head><body><main><h1>Probe</h1>` +
+        `<p style="color:#595959;background:#fff">Hint text at 7:1</p></main></body></html>`,
+    );
+    const results = await expectAccessible(page, { name: "probe-good-contrast" });
+    expect(blockingViolations(results)).toEqual([]);
+    expect(results.passes.map((p) => p.id)).toContain("color-contrast");
+  });
+});
+
+describe("signed-out pages", () => {
+  it("home", async () => {
+    const page = await browser.newPage();
+    await page.goto("/");
+    await page.getByRole("heading", { name: "Knucklebench", level: 1 }).waitFor();
+    await expectAccessible(page, { name: "home" });
+  });
+
+  it("sign-in", async () => {
+    const page = await browser.newPage();
+    await page.goto("/sign-in");
+    await page.getByRole("heading", { name: "Sign in" }).waitFor();
+    await expectAccessible(page, { name: "sign-in" });
+  });
+
+  it("sign-in with its validation errors shown", async () => {
+    const page = await browser.newPage();
+    await page.goto("/sign-in");
+    await page.getByRole("button", { name: "Sign in" }).click();
+    await page.locator("#email-error").waitFor();
+    await expectAccessible(page, { name: "sign-in-errors" });
+  });
+
+  it("sign-up", async () => {
+    const page = await browser.newPage();
+    await page.goto("/sign-up");
+    await page.getByRole("heading", { name: "Create your account" }).waitFor();
+    await expectAccessible(page, { name: "sign-up" });
+  });
+
+  it("sign-up with its validation errors shown", async () => {
+    const page = await browser.newPage();
+    await page.goto("/sign-up");
+    await page.getByLabel("Password").fill("short");
+    await page.getByRole("button", { name: "Create account" }).click();
+    await page.locator("#name-error").waitFor();
+    await page.locator("#password-error").waitFor();
+    expect(await page.getByLabel("Password").getAttribute("aria-invalid")).toBe("true");
+    await expectAccessible(page, { name: "sign-up-errors" });
+  });
+
+  it("a page that does not exist (404)", async () => {
+    const page = await browser.newPage();
+    const response = await page.goto("/no-such-page");
+    expect(response?.status()).toBe(404);
+    await page.getByText(/could not be found/i).first().waitFor();
+    await expectAccessible(page, { name: "not-found" });
+  });
+});
+
+describe("signed-in pages", () => {
+  let owner: Account;
+  let collaborator: Account;
+  let workspaceId: string;
+  let kitId: string | undefined;
+
+  beforeAll(async () => {
+    owner = await signUpByApi("Mara Kestrel");
+    collaborator = await signUpByApi("Jonas Pell");
+    const { workspaces } = await apiAs<{ workspaces: { id: string }[] }>(owner, "/api/workspaces");
+    workspaceId = workspaces[0].id;
+  });
+
+  const ensureKit = async () => {
+    kitId ??= (await apiAs<{ kit: { id: string } }>(owner, `/api/workspaces/${workspaceId}/kits`, {
+      method: "POST",
+      body: { name: "Tarnwick 10 front corner", scale: "1:10", notes: "4 mm neck, printed knuckle" },
+    })).kit.id;
+    return kitId;
+  };
+
+  // Runs before any kit exists in the owner's workspace (vitest keeps the order within a file).
+  it("kits list, empty", async () => {
+    const page = await pageAs(owner);
+    await page.goto(`/workspaces/${workspaceId}/kits`);
+    await page.getByText("No kits yet").waitFor();
+    await expectAccessible(page, { name: "kits-empty" });
+  });
+
+  it("kits list with a kit", async () => {
+    await ensureKit();
+    const page = await pageAs(owner);
+    await page.goto(`/workspaces/${workspaceId}/kits`);
+    await page.getByRole("list", { name: "Kits" }).getByText("Tarnwick 10 front corner").waitFor();
+    await expectAccessible(page, { name: "kits-with-kit" });
+  });
+
+  it("kits list with the delete confirmation open and the new-kit form's errors shown", async () => {
+    await ensureKit();
+    const page = await pageAs(owner);
+    await page.goto(`/workspaces/${workspaceId}/kits`);
+    await page.getByRole("button", { name: "Delete Tarnwick 10 front corner" }).click();
+    await page.getByText("Delete this kit?").waitFor();
+    await page.getByRole("button", { name: "Create kit" }).click();
+    await page.locator("#kit-name-error").waitFor();
+    await expectAccessible(page, { name: "kits-confirm-and-errors" });
+  });
+
+  it("a kit's page, once its figures and charts are drawn", async () => {
+    const id = await ensureKit();
+    const page = await pageAs(owner);
+    await page.goto(`/workspaces/${workspaceId}/kits/${id}`);
+    await page.getByRole("region", { name: "Steer lock" }).getByText("Limited by").waitFor();
+    await page.getByRole("table", { name: "Neck diameter what-if" }).waitFor();
+    await page.locator("figure .recharts-line").nth(5).waitFor();
+    // Each chart's svg is focusable (recharts' keyboard layer), so it carries its caption as its name.
+    for (const chart of ["Camber and roll centre over travel", "Steer lock over travel", "Joint angle over rack travel (static)"]) {
+      await page.getByRole("application", { name: chart }).waitFor();
+    }
+    await expectAccessible(page, { name: "kit-sheet" });
+  });
+
+  it("members, as the owner, with a second member", async () => {
+    await apiAs(owner, `/api/workspaces/${workspaceId}/members`, { method: "POST", body: { email: collaborator.email, role: "editor" } });
+    const page = await pageAs(owner);
+    await page.goto(`/workspaces/${workspaceId}/members`);
+    await page.getByRole("combobox", { name: "Role of Jonas Pell" }).waitFor();
+    await expectAccessible(page, { name: "members-owner" });
+  });
+
+  it("members, as an editor (read only)", async () => {
+    const page = await pageAs(collaborator);
+    await page.goto(`/workspaces/${workspaceId}/members`);
+    await page.getByRole("cell", { name: "Mara Kestrel" }).waitFor();
+    await expectAccessible(page, { name: "members-editor" });
+  });
+
+  it("new workspace, also with its validation error shown", async () => {
+    const page = await pageAs(owner);
+    await page.goto("/workspaces/new");
+    await page.getByRole("heading", { name: "New workspace" }).waitFor();
+    await expectAccessible(page, { name: "new-workspace" });
+    await page.getByRole("button", { name: "Create workspace" }).click();
+    await page.locator("#workspace-name-error").waitFor();
+    await expectAccessible(page, { name: "new-workspace-errors" });
+  });
+
+  it("a workspace the user is not a member of (404 inside the app)", async () => {
+    const page = await pageAs(owner);
+    const response = await page.goto(`/workspaces/${randomUUID()}/kits`);
+    expect(response?.status()).toBe(404);
+    await page.getByText(/could not be found/i).first().waitFor();
+    await expectAccessible(page, { name: "not-found-signed-in" });
+  });
+});
