@@ -165,7 +165,7 @@ export function ViewFrame({ id, title, axes, box, handles = [], children, notes 
     <section aria-label={title} className="flex h-full min-h-0 flex-col overflow-hidden rounded-md border border-ink/15 bg-white">
       <header className="flex items-center gap-2 border-b border-ink/10 px-2 py-1">
         <h3 className="text-xs font-semibold uppercase tracking-wide text-ink/80">{title}</h3>
-        <span className="text-xs text-ink/75">{axes}</span>
+        <span className="text-xs text-ink-muted">{axes}</span>
         <span className="ml-auto flex gap-1">
           <button type="button" className="rounded px-1.5 text-xs text-ink/80 hover:bg-ink/5" aria-label={`Zoom in, ${title}`} onClick={() => t && setT(zoomAt(t, [size.width / 2, size.height / 2], 1.25))}>+</button>
           <button type="button" className="rounded px-1.5 text-xs text-ink/80 hover:bg-ink/5" aria-label={`Zoom out, ${title}`} onClick={() => t && setT(zoomAt(t, [size.width / 2, size.height / 2], 0.8))}>−</button>

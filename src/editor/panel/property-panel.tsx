@@ -78,7 +78,7 @@ export function PropertyPanel() {
     if (f.path === GEAR_RATIOS) {
       return (
         <div key={key} className="col-span-2 flex flex-col gap-1">
-          <span className="text-xs font-medium text-ink">{f.label} <span className="font-normal text-ink/75">({f.hint})</span></span>
+          <span className="text-xs font-medium text-ink">{f.label} <span className="font-normal text-ink-muted">({f.hint})</span></span>
           <div className="flex flex-wrap items-end gap-2">
             {Array.from({ length: ratioCount }, (_, i) => {
               const k = gearKey(i);
@@ -102,7 +102,7 @@ export function PropertyPanel() {
     }
     const label = (
       <label htmlFor={id} className="text-xs font-medium text-ink">
-        {f.label}{u ? <span className="font-normal text-ink/75"> ({u})</span> : null}
+        {f.label}{u ? <span className="font-normal text-ink-muted"> ({u})</span> : null}
       </label>
     );
     const hint = [f.kind === "choice" || f.kind === "text" || f.kind === "boolean" ? "" : fieldRangeText(f, unit), f.optional ? `empty: ${f.optional.absentMeans}` : "", f.hint ?? ""].filter(Boolean).join(" · ");
@@ -125,7 +125,7 @@ export function PropertyPanel() {
           <select {...form.register(key)} id={id} disabled={readOnly} aria-describedby={describedBy} className="rounded border border-ink/25 bg-white px-1.5 py-1 text-sm" onChange={(e) => { void form.register(key).onChange(e); write(); }}>
             {f.choices!.map((c) => <option key={c.value} value={c.value}>{c.label}</option>)}
           </select>
-          {hint ? <p id={hintId} className="text-[11px] text-ink/75">{hint}</p> : null}
+          {hint ? <p id={hintId} className="text-[11px] text-ink-muted">{hint}</p> : null}
           {message}
         </div>
       );
@@ -145,7 +145,7 @@ export function PropertyPanel() {
           onBlur={(e) => { void form.register(key).onBlur(e); write(); }}
           onKeyDown={onKey(key)}
         />
-        {hint ? <p id={hintId} className="text-[11px] text-ink/75">{hint}</p> : null}
+        {hint ? <p id={hintId} className="text-[11px] text-ink-muted">{hint}</p> : null}
         {message}
       </div>
     );
