@@ -56,13 +56,13 @@ export function EditorWorkbench({ plots, sideTabs = [] }: { plots: ReactNode; si
             </Panel>
             <Handle label="Resize the views and the plots" orientation="vertical" />
             <Panel id="plots" defaultSize="38" minSize="15">
-              <div className="h-full overflow-hidden rounded-md border border-ink/15 bg-white">{plots}</div>
+              <div data-testid="editor-plots-area" className="h-full overflow-hidden rounded-md border border-ink/15 bg-white">{plots}</div>
             </Panel>
           </Group>
         </Panel>
         <Handle label="Resize the drawings and the side panel" orientation="horizontal" />
         <Panel id="side" defaultSize="32" minSize="22">
-          <TabSet label="Figures and properties" tabs={tabs} className="h-full rounded-md border border-ink/15 bg-white" />
+          <div data-testid="editor-side" className="h-full"><TabSet label="Figures and properties" tabs={tabs} className="h-full rounded-md border border-ink/15 bg-white" /></div>
         </Panel>
       </Group>
       <ConflictDialog />
