@@ -15,7 +15,7 @@ const browser = setUpBrowser();
 const shots = fileURLToPath(new URL("../../.data/e2e-shots", import.meta.url));
 const demo = DEMO_LAYOUTS[0]!;
 
-type Kit = { id: string; version: number; name: string; layout: { drive: { neckDiameterMm: number }; frontView: { lowerArm: { outer: { y: number; z: number } } } } };
+type Kit = { id: string; version: number; name: string; layout: { drive: { neckDiameterMm: number }; frontView: { lowerOuter: { y: number; z: number } } } };
 
 let owner: Account;
 let workspaceId: string;
@@ -128,10 +128,10 @@ describe("the kit editor", () => {
     await openEditor(page, kit.id);
     const lock0 = number(await figure(page, "steer-lock-worst"));
     const sf0Text = await figure(page, "safety-factor");
+    let before = await seq(page);
     await page.getByTestId("tab-properties").click();
     const neck = page.getByLabel("Neck diameter");
     const thinner = kit.layout.drive.neckDiameterMm - 0.8;
-    let before = await seq(page);
     await neck.fill(String(thinner));
     await neck.press("Enter");
     await page.getByTestId("tab-readouts").click();
@@ -259,7 +259,7 @@ describe("the kit editor", () => {
     await page.getByText("All changes saved").waitFor();
     const stored = await readKit(kit.id);
     // One grid step (0.5 mm) then ten: 5.5 mm up in z.
-    expect(stored.layout.frontView.lowerArm.outer.z - kit.layout.frontView.lowerArm.outer.z).toBeCloseTo(5.5, 6);
+    expect(stored.layout.frontView.lowerOuter.z - kit.layout.frontView.lowerOuter.z).toBeCloseTo(5.5, 6);
     await shot(page, "keyboard");
   });
 
