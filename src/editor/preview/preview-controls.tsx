@@ -46,7 +46,9 @@ export function PreviewControls() {
   const droop = useEditor((s) => (s.draft ?? s.layout).frontView.droopTravelMm);
   const bump = useEditor((s) => (s.draft ?? s.layout).frontView.bumpTravelMm);
   const range = useRef({ rackMm: rackMax, droopMm: droop, bumpMm: bump });
-  range.current = { rackMm: rackMax, droopMm: droop, bumpMm: bump };
+  useEffect(() => {
+    range.current = { rackMm: rackMax, droopMm: droop, bumpMm: bump };
+  }, [rackMax, droop, bump]);
 
   useEffect(() => {
     if (!preview.sweeping) return;
