@@ -178,12 +178,13 @@ describe("signed-in pages", () => {
     const id = await ensureKit();
     const page = await pageAs(owner);
     await page.goto(`/workspaces/${workspaceId}/kits/${id}`);
+    await page.getByTestId("tab-sheet").click();
     await page.getByRole("region", { name: "Steer lock" }).getByText("Limited by").waitFor();
     await page.getByRole("table", { name: "Neck diameter what-if" }).waitFor();
     await page.locator("figure .recharts-line").nth(5).waitFor();
     // Each chart's svg is focusable (recharts' keyboard layer), so it carries its caption as its name.
     for (const chart of ["Camber and roll centre over travel", "Steer lock over travel", "Joint angle over rack travel (static)"]) {
-      await page.getByRole("application", { name: chart }).waitFor();
+      await page.getByTestId("analysis-sheet").getByRole("application", { name: chart }).waitFor();
     }
     await expectAccessible(page, { name: "kit-sheet" });
   });
