@@ -6,7 +6,7 @@ import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { useEditor, useEditorStore } from "../store/editor-context";
 import { reloadServerCopy, saveAsNewKit } from "./save-actions";
-import { ModalDialog } from "./modal-dialog";
+import { ModalDialog } from "@/components/ui/modal-dialog";
 
 function when(iso: string | null): string {
   if (!iso) return "";

@@ -6,7 +6,7 @@ import { useEffect, useRef, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { selectDirty } from "../store/editor-store";
 import { useEditor, useEditorStore } from "../store/editor-context";
-import { ModalDialog } from "./modal-dialog";
+import { ModalDialog } from "@/components/ui/modal-dialog";
 
 export function LeaveGuard() {
   const store = useEditorStore();

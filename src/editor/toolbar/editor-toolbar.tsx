@@ -4,11 +4,13 @@
 import { useId } from "react";
 import { Button } from "@/components/ui/button";
 import { api } from "@/lib/api-client";
-import { selectDirty, redo, undo, type ShowOptions } from "../store/editor-store";
+import { selectDirty, selectFaulty, redo, undo, type ShowOptions } from "../store/editor-store";
 import { useEditor, useEditorStore, useHistoryDepth } from "../store/editor-context";
 import { GRID_STEPS_MM } from "../tools/snapping";
 import { formatLength, isLengthUnit, type LengthUnit } from "../units/length-unit";
-import { SHORTCUT_MOD } from "./shortcut-label";
+
+// How tooltips name the shortcuts' modifier: one text for every platform, so server and browser render alike.
+const SHORTCUT_MOD = "Ctrl/⌘";
 
 const SHOW_LABELS: Record<keyof ShowOptions, string> = {
   kingpinAxis: "Kingpin axis and ground point",
@@ -41,7 +43,7 @@ export function EditorToolbar({ onSave }: { onSave: () => void }) {
   const settings = useEditor((s) => s.settings);
   const saving = useEditor((s) => s.save.status === "saving");
   const dirty = useEditor(selectDirty);
-  const faulty = useEditor((s) => s.live.fault !== null && s.draft === null);
+  const faulty = useEditor(selectFaulty);
   const { canUndo, canRedo } = useHistoryDepth();
   const gridId = useId();
   const unitId = useId();
@@ -72,7 +74,7 @@ export function EditorToolbar({ onSave }: { onSave: () => void }) {
         <div className="flex items-center gap-1">
           <label htmlFor={gridId} className="text-xs">Grid</label>
           <select id={gridId} data-testid="grid-step" value={String(settings.gridStepMm)} onChange={(e) => store.getState().setSettings({ gridStepMm: Number(e.target.value) })} className="rounded border border-ink/20 bg-white px-1 py-1 text-xs">
-            {GRID_STEPS_MM[unit].map((mm) => <option key={mm} value={String(mm)}>{formatLength(mm, unit, unit === "in" ? 2 : 2)}</option>)}
+            {GRID_STEPS_MM[unit].map((mm) => <option key={mm} value={String(mm)}>{formatLength(mm, unit)}</option>)}
           </select>
         </div>
       )}

@@ -12,7 +12,7 @@ import { useLiveAnalysis } from "../readouts/use-live-analysis";
 import { ConflictDialog } from "../save/conflict-dialog";
 import { LeaveGuard } from "../save/leave-guard";
 import { saveLayout } from "../save/save-actions";
-import { selectDirty } from "../store/editor-store";
+import { selectCanSave } from "../store/editor-store";
 import { useEditorStore } from "../store/editor-context";
 import { EditorToolbar } from "../toolbar/editor-toolbar";
 import { TabSet, type TabDef } from "./tab-set";
@@ -26,9 +26,7 @@ export function EditorWorkbench({ plots, sideTabs = [] }: { plots: ReactNode; si
   const store = useEditorStore();
   useLiveAnalysis(store);
   const save = useCallback(() => {
-    const s = store.getState();
-    if (s.readOnly || !selectDirty(s) || (s.live.fault && !s.draft)) return;
-    void saveLayout(store);
+    if (selectCanSave(store.getState())) void saveLayout(store);
   }, [store]);
   useEditorShortcuts(store, save);
 
