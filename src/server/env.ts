@@ -10,16 +10,30 @@ const envSchema = z.object({
   DB_POOL_MAX: z.coerce.number().int().min(1).max(100).default(10),
   BETTER_AUTH_SECRET: z.string().min(16).optional(),
   BETTER_AUTH_URL: z.string().url().default("http://127.0.0.1:3000"),
-  // Comma-separated extra origins allowed to POST to the auth routes.
+  // Comma-separated extra origins allowed to send state-changing requests (auth and app routes).
   KB_TRUSTED_ORIGINS: z.string().default(""),
   KB_AUTH_RATE_LIMIT: z.enum(["on", "off"]).optional(),
+  // Who the auth rate limit counts a request against (src/server/http/client-address.ts). By default the
+  // connection's own peer address; X-Forwarded-For is read only through proxies trusted here: either how
+  // many proxy hops sit in front (KB_TRUST_PROXY_HOPS) or which addresses/CIDR ranges they have
+  // (KB_TRUSTED_PROXIES, comma-separated, e.g. "10.0.0.5, 192.168.0.0/16"; "loopback" etc. also work).
+  KB_TRUST_PROXY_HOPS: z.coerce.number().int().min(0).max(10).default(0),
+  KB_TRUSTED_PROXIES: z.string().default(""),
+  // Set by scripts/serve.mjs (`npm start`): the request header in which it records each connection's peer
+  // address, replacing any copy a client sent. Unset (e.g. plain `next start`), no peer address is known.
+  KB_SOCKET_ADDRESS_HEADER: z.string().regex(/^[a-z0-9-]{1,64}$/, "must be a lower-case header name").optional(),
   KB_MAX_BODY_BYTES: z.coerce.number().int().min(1024).max(10_000_000).default(262_144),
 });
 
 export type Env = z.infer<typeof envSchema>;
 
+const checkedEnvSchema = envSchema.refine((e) => !(e.KB_TRUST_PROXY_HOPS > 0 && e.KB_TRUSTED_PROXIES.trim()), {
+  message: "set KB_TRUST_PROXY_HOPS or KB_TRUSTED_PROXIES, not both",
+  path: ["KB_TRUSTED_PROXIES"],
+});
+
 function readEnv(): Env {
-  const parsed = envSchema.safeParse(process.env);
+  const parsed = checkedEnvSchema.safeParse(process.env);
   if (!parsed.success) {
     const lines = parsed.error.issues.map((i) => `  ${i.path.join(".")}: ${i.message}`).join("\n");
     throw new Error(`Invalid environment:\n${lines}`);
@@ -37,4 +51,18 @@ export function authSecret(): string {
     throw new Error("BETTER_AUTH_SECRET must be set (at least 16 characters) when NODE_ENV=production");
   }
   return DEV_SECRET;
+}
+
+/**
+ * Origins allowed to send state-changing requests, to the auth routes (better-auth's trustedOrigins) and to
+ * every app write route (src/server/http/route.ts): the app's own origin, its localhost ↔ 127.0.0.1 twin
+ * (the same server is reached by either name), and KB_TRUSTED_ORIGINS.
+ */
+export function trustedOrigins(): string[] {
+  const base = new URL(env.BETTER_AUTH_URL);
+  const origins = new Set([base.origin]);
+  if (base.hostname === "127.0.0.1") origins.add(base.origin.replace("127.0.0.1", "localhost"));
+  if (base.hostname === "localhost") origins.add(base.origin.replace("localhost", "127.0.0.1"));
+  for (const o of env.KB_TRUSTED_ORIGINS.split(",").map((s) => s.trim()).filter(Boolean)) origins.add(o);
+  return [...origins];
 }

@@ -6,15 +6,20 @@ export const BASE = process.env.BETTER_AUTH_URL ?? "http://127.0.0.1:3000";
 
 type Handler<P> = (req: Request, ctx: { params: Promise<P> }) => Promise<Response>;
 
-export type CallOptions = { cookie?: string; body?: unknown; rawBody?: string; headers?: Record<string, string> };
+/** `omitOrigin` sends a write without the Origin header a browser would add (every write gets the app's by default). */
+export type CallOptions = { cookie?: string; body?: unknown; rawBody?: string; headers?: Record<string, string>; omitOrigin?: boolean };
 
 export async function call<P>(handler: Handler<P>, method: string, path: string, params: P, opts: CallOptions = {}) {
   const headers: Record<string, string> = { ...opts.headers };
+  // A browser sends Origin on every request but GET and HEAD; the write routes refuse a cookie without it.
+  if (method !== "GET" && method !== "HEAD" && !opts.omitOrigin && !Object.keys(headers).some((h) => h.toLowerCase() === "origin")) {
+    headers.origin = new URL(BASE).origin;
+  }
   if (opts.cookie) headers.cookie = opts.cookie;
   let body: string | undefined;
   if (opts.rawBody !== undefined) body = opts.rawBody;
   else if (opts.body !== undefined) body = JSON.stringify(opts.body);
-  if (body !== undefined && !headers["content-type"]) headers["content-type"] = "application/json";
+  if (body !== undefined && !Object.keys(headers).some((h) => h.toLowerCase() === "content-type")) headers["content-type"] = "application/json";
   const res = await handler(new Request(`${BASE}${path}`, { method, headers, body }), { params: Promise.resolve(params) });
   const text = await res.text();
   let json: unknown = null;
@@ -37,6 +42,14 @@ export function randomClientIp(): string {
   return `198.18.${b()}.${b()}`;
 }
 
+/**
+ * Headers as scripts/serve.mjs hands a request from `ip` to the app: the connection's peer address in the
+ * header KB_SOCKET_ADDRESS_HEADER names (set for the integration tests in tests/vitest.config.ts).
+ */
+export function fromAddress(ip: string): Record<string, string> {
+  return { "x-kb-socket-address": ip };
+}
+
 export function uniqueEmail(tag: string): string {
   return `${tag}-${randomUUID().slice(0, 8)}@test.example`;
 }
@@ -47,7 +60,7 @@ export async function signUp(name: string, email = uniqueEmail(name.toLowerCase(
     new Request(`${BASE}/api/auth/sign-up/email`, {
       method: "POST",
       // A distinct client address per sign-up, so the auth rate limit (on in these tests) never pools them.
-      headers: { "content-type": "application/json", origin: new URL(BASE).origin, "x-forwarded-for": randomClientIp() },
+      headers: { "content-type": "application/json", origin: new URL(BASE).origin, ...fromAddress(randomClientIp()) },
       body: JSON.stringify({ name, email, password }),
     }),
   );
@@ -60,7 +73,7 @@ export async function signIn(email: string, password: string, headers: Record<st
   return authPost(
     new Request(`${BASE}/api/auth/sign-in/email`, {
       method: "POST",
-      headers: { "content-type": "application/json", origin: new URL(BASE).origin, "x-forwarded-for": randomClientIp(), ...headers },
+      headers: { "content-type": "application/json", origin: new URL(BASE).origin, ...fromAddress(randomClientIp()), ...headers },
       body: JSON.stringify({ email, password }),
     }),
   );

@@ -207,6 +207,12 @@ export const selectShownLayout = (s: EditorState): Layout => s.draft ?? s.layout
 /** True when the document differs from what was last loaded or saved. */
 export const selectDirty = (s: EditorState): boolean => JSON.stringify(s.layout) !== s.savedJson;
 
+/** True when the document is the thing to fault: the server would refuse it, so Save waits for a fix. */
+export const selectFaulty = (s: EditorState): boolean => s.live.fault !== null && s.draft === null;
+
+/** Whether Save (button or shortcut) has anything it may do now. */
+export const selectCanSave = (s: EditorState): boolean => !s.readOnly && selectDirty(s) && !selectFaulty(s);
+
 export function undo(store: EditorStore): void {
   if (store.getState().draft) return;
   store.temporal.getState().undo();
