@@ -125,7 +125,7 @@ function EnvelopeLegend({ model, gradientId }: { model: EnvelopeModel; gradientI
   );
 }
 
-type EnvelopeModel = ReturnType<typeof envelopeModel>;
+type EnvelopeModel = NonNullable<ReturnType<typeof envelopeModel>>;
 
 /** Everything the map draws, in svg units; travel converted to the user's unit for the axis. */
 function envelopeModel(a: AnalysisResult, unit: LengthUnit) {

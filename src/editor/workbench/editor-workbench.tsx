@@ -6,6 +6,7 @@ import { Group, Panel, Separator } from "react-resizable-panels";
 import { FrontViewLoaded, JointSectionViewLoaded, TopViewLoaded } from "../canvas/views-loader";
 import { useEditorShortcuts } from "../keyboard/use-editor-shortcuts";
 import { PropertyPanel } from "../panel/property-panel";
+import { EditorPlots } from "../plots/editor-plots";
 import { PreviewControls } from "../preview/preview-controls";
 import { ReadoutsPanel } from "../readouts/readouts-panel";
 import { useLiveAnalysis } from "../readouts/use-live-analysis";
@@ -22,7 +23,7 @@ function Handle({ label, orientation }: { label: string; orientation: "horizonta
   return <Separator aria-label={label} className={`${bar} shrink-0 rounded bg-transparent hover:bg-steel/30 focus-visible:bg-steel/50 focus-visible:outline-none data-[separator=active]:bg-steel/50`} />;
 }
 
-export function EditorWorkbench({ plots, sideTabs = [] }: { plots: ReactNode; sideTabs?: readonly TabDef[] }) {
+export function EditorWorkbench({ plots = <EditorPlots />, sideTabs = [] }: { plots?: ReactNode; sideTabs?: readonly TabDef[] }) {
   const store = useEditorStore();
   useLiveAnalysis(store);
   const save = useCallback(() => {
