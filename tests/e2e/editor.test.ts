@@ -165,6 +165,48 @@ describe("the kit editor", () => {
     expect(Number(await page.getByLabel("Neck diameter").inputValue())).toBeCloseTo(thinner, 6);
   });
 
+  it("picking a point on the neck trade-off sets that neck in the panel, and the figures follow", async () => {
+    const kit = await newDemoKit("Trade-off corner");
+    const page = await pageAs(browser, owner, { width: 1920, height: 1080 });
+    await openEditor(page, kit.id);
+    const sf0 = number(await figure(page, "safety-factor"));
+    const lock0 = number(await figure(page, "steer-lock-worst"));
+    await page.getByTestId("tab-plot-tab-neck").click();
+    const plot = page.getByTestId("plot-neck-tradeoff");
+    await page.locator('[data-testid="plot-neck-tradeoff"][data-stale="false"]').waitFor();
+    // The samples, thinnest first, as the plot's buttons name them (neck-pick-<mm>).
+    const diameters = await plot.locator('[data-testid^="neck-pick-"]').evaluateAll((els) =>
+      els.map((el) => ({ mm: Number(el.getAttribute("data-testid")!.slice("neck-pick-".length)), ok: !(el as HTMLButtonElement).disabled })),
+    );
+    const current = kit.layout.drive.neckDiameterMm;
+    const k = diameters.findIndex((d) => d.ok && d.mm < current);
+    expect(k, "a thinner neck that works is on the curve").toBeGreaterThanOrEqual(0);
+
+    // A click on that point of the steer-lock curve (the chart picks the sample under the pointer).
+    let before = await seq(page);
+    const dot = plot.locator(".recharts-line-dots").first().locator("circle").nth(k);
+    const box = (await dot.boundingBox())!;
+    await page.mouse.click(box.x + box.width / 2, box.y + box.height / 2);
+    await settled(page, before);
+    await page.getByTestId("tab-properties").click();
+    expect(Number(await page.getByRole("textbox", { name: /^Neck diameter/ }).inputValue())).toBeCloseTo(diameters[k]!.mm, 6);
+    await page.getByTestId("tab-readouts").click();
+    expect(number(await figure(page, "safety-factor"))).toBeLessThan(sf0);
+    expect(number(await figure(page, "steer-lock-worst"))).toBeGreaterThanOrEqual(lock0);
+    expect(await page.getByTestId("save-status").getAttribute("data-dirty")).toBe("true");
+    await shot(page, "neck-tradeoff");
+
+    // The same from the keyboard: the buttons under the curve, arrow keys and Enter.
+    before = await seq(page);
+    await plot.getByTestId(`neck-pick-${diameters[k]!.mm}`).focus();
+    await page.keyboard.press("ArrowRight");
+    await page.keyboard.press("Enter");
+    await settled(page, before);
+    await page.getByTestId("tab-properties").click();
+    expect(Number(await page.getByRole("textbox", { name: /^Neck diameter/ }).inputValue())).toBeCloseTo(diameters[k + 1]!.mm, 6);
+    await expectAccessible(page, { name: "editor-neck-tradeoff" });
+  });
+
   it("a save on a stale version offers the choice; saving mine as a new kit loses neither version", async () => {
     const kit = await newDemoKit("Conflict corner");
     const mine = await pageAs(browser, owner, { width: 1280, height: 800 });
