@@ -31,9 +31,10 @@ export default defineConfig({
           environment: "node",
           include: ["tests/api/**/*.test.ts", "tests/server/**/*.test.ts"],
           fileParallelism: false,
-          // Production keeps the auth rate limit on; so do these tests (and one of them checks it).
+          // Production keeps the auth rate limit on; so do these tests (and one of them checks it). The
+          // requests carry their peer address as scripts/serve.mjs would stamp it (tests/helpers/api.ts).
           // The analysis routes run their layouts in a worker thread here too (TypeScript loaded by tsx).
-          env: { KB_AUTH_RATE_LIMIT: "on", KB_ANALYSIS_WORKERS: "1", KB_ANALYSIS_WORKER_TSX: "1" },
+          env: { KB_AUTH_RATE_LIMIT: "on", KB_SOCKET_ADDRESS_HEADER: "x-kb-socket-address", KB_ANALYSIS_WORKERS: "1", KB_ANALYSIS_WORKER_TSX: "1" },
           testTimeout: 30_000,
           hookTimeout: 60_000,
         },

@@ -13,13 +13,27 @@ const envSchema = z.object({
   // Comma-separated extra origins allowed to send state-changing requests (auth and app routes).
   KB_TRUSTED_ORIGINS: z.string().default(""),
   KB_AUTH_RATE_LIMIT: z.enum(["on", "off"]).optional(),
+  // Who the auth rate limit counts a request against (src/server/http/client-address.ts). By default the
+  // connection's own peer address; X-Forwarded-For is read only through proxies trusted here: either how
+  // many proxy hops sit in front (KB_TRUST_PROXY_HOPS) or which addresses/CIDR ranges they have
+  // (KB_TRUSTED_PROXIES, comma-separated, e.g. "10.0.0.5, 192.168.0.0/16"; "loopback" etc. also work).
+  KB_TRUST_PROXY_HOPS: z.coerce.number().int().min(0).max(10).default(0),
+  KB_TRUSTED_PROXIES: z.string().default(""),
+  // Set by scripts/serve.mjs (`npm start`): the request header in which it records each connection's peer
+  // address, replacing any copy a client sent. Unset (e.g. plain `next start`), no peer address is known.
+  KB_SOCKET_ADDRESS_HEADER: z.string().regex(/^[a-z0-9-]{1,64}$/, "must be a lower-case header name").optional(),
   KB_MAX_BODY_BYTES: z.coerce.number().int().min(1024).max(10_000_000).default(262_144),
 });
 
 export type Env = z.infer<typeof envSchema>;
 
+const checkedEnvSchema = envSchema.refine((e) => !(e.KB_TRUST_PROXY_HOPS > 0 && e.KB_TRUSTED_PROXIES.trim()), {
+  message: "set KB_TRUST_PROXY_HOPS or KB_TRUSTED_PROXIES, not both",
+  path: ["KB_TRUSTED_PROXIES"],
+});
+
 function readEnv(): Env {
-  const parsed = envSchema.safeParse(process.env);
+  const parsed = checkedEnvSchema.safeParse(process.env);
   if (!parsed.success) {
     const lines = parsed.error.issues.map((i) => `  ${i.path.join(".")}: ${i.message}`).join("\n");
     throw new Error(`Invalid environment:\n${lines}`);

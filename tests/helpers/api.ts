@@ -42,6 +42,14 @@ export function randomClientIp(): string {
   return `198.18.${b()}.${b()}`;
 }
 
+/**
+ * Headers as scripts/serve.mjs hands a request from `ip` to the app: the connection's peer address in the
+ * header KB_SOCKET_ADDRESS_HEADER names (set for the integration tests in tests/vitest.config.ts).
+ */
+export function fromAddress(ip: string): Record<string, string> {
+  return { "x-kb-socket-address": ip };
+}
+
 export function uniqueEmail(tag: string): string {
   return `${tag}-${randomUUID().slice(0, 8)}@test.example`;
 }
@@ -52,7 +60,7 @@ export async function signUp(name: string, email = uniqueEmail(name.toLowerCase(
     new Request(`${BASE}/api/auth/sign-up/email`, {
       method: "POST",
       // A distinct client address per sign-up, so the auth rate limit (on in these tests) never pools them.
-      headers: { "content-type": "application/json", origin: new URL(BASE).origin, "x-forwarded-for": randomClientIp() },
+      headers: { "content-type": "application/json", origin: new URL(BASE).origin, ...fromAddress(randomClientIp()) },
       body: JSON.stringify({ name, email, password }),
     }),
   );
@@ -65,7 +73,7 @@ export async function signIn(email: string, password: string, headers: Record<st
   return authPost(
     new Request(`${BASE}/api/auth/sign-in/email`, {
       method: "POST",
-      headers: { "content-type": "application/json", origin: new URL(BASE).origin, "x-forwarded-for": randomClientIp(), ...headers },
+      headers: { "content-type": "application/json", origin: new URL(BASE).origin, ...fromAddress(randomClientIp()), ...headers },
       body: JSON.stringify({ email, password }),
     }),
   );

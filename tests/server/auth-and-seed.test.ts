@@ -5,15 +5,15 @@ import { kits, members, users, workspaces } from "@/server/db/schema";
 import { DEMO_PASSWORD, DEMO_PEOPLE, DEMO_WORKSPACE, seedDemo } from "@/server/data/demo-seed";
 import { POST as authPost } from "@/app/api/auth/[...all]/route";
 import * as workspacesRoute from "@/app/api/workspaces/route";
-import { BASE, call, randomClientIp, signIn, signUp, uniqueEmail } from "../helpers/api";
+import { BASE, call, fromAddress, randomClientIp, signIn, signUp, uniqueEmail } from "../helpers/api";
 
 describe("sign-in", () => {
   it("accepts the right password and refuses a wrong one without saying which part was wrong", async () => {
     const u = await signUp("Sable Ruiz");
-    const good = await signIn(u.email, u.password, { "x-forwarded-for": "203.0.113.10" });
+    const good = await signIn(u.email, u.password, fromAddress("203.0.113.10"));
     expect(good.status).toBe(200);
     expect(good.headers.getSetCookie().join(";")).toMatch(/session_token=/);
-    const bad = await signIn(u.email, "not-the-password", { "x-forwarded-for": "203.0.113.10" });
+    const bad = await signIn(u.email, "not-the-password", fromAddress("203.0.113.10"));
     expect(bad.status).toBe(401);
   });
 
@@ -21,11 +21,11 @@ describe("sign-in", () => {
     const ip = randomClientIp();
     const email = uniqueEmail("flood");
     const statuses: number[] = [];
-    for (let i = 0; i < 12; i++) statuses.push((await signIn(email, "wrong-password-1", { "x-forwarded-for": ip })).status);
+    for (let i = 0; i < 12; i++) statuses.push((await signIn(email, "wrong-password-1", fromAddress(ip))).status);
     expect(statuses.slice(0, 10).every((s) => s === 401)).toBe(true);
     expect(statuses.slice(10)).toEqual([429, 429]);
     // Another address is not affected.
-    expect((await signIn(email, "wrong-password-1", { "x-forwarded-for": randomClientIp() })).status).toBe(401);
+    expect((await signIn(email, "wrong-password-1", fromAddress(randomClientIp()))).status).toBe(401);
   });
 
   it("gives every new user a personal workspace they own", async () => {
@@ -52,7 +52,7 @@ describe("demo seed", () => {
 
   it("its people can sign in with the printed password", async () => {
     await seedDemo();
-    const res = await signIn(DEMO_PEOPLE[0]!.email, DEMO_PASSWORD, { "x-forwarded-for": "203.0.113.99" });
+    const res = await signIn(DEMO_PEOPLE[0]!.email, DEMO_PASSWORD, fromAddress("203.0.113.99"));
     expect(res.status).toBe(200);
   });
 });

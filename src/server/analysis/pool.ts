@@ -4,23 +4,43 @@ import { Worker } from "node:worker_threads";
 import { HttpError } from "../http/errors";
 import { runAnalysisJob, type AnalysisJob, type AnalysisOutcome } from "./analysis-job";
 
-// KB_ANALYSIS_WORKERS: how many worker threads solve layouts; 0 solves them on the request's own thread.
-// Unset: one fewer than the cores (at least one, at most four), leaving a core for the event loop.
-function poolSize(): number {
-  const configured = process.env.KB_ANALYSIS_WORKERS;
-  if (configured === undefined || configured === "") return Math.max(1, Math.min(4, availableParallelism() - 1));
+/**
+ * How many worker threads solve layouts. KB_ANALYSIS_WORKERS wins (0 solves them on the request's own
+ * thread); unset, one fewer than the cores (at least one, at most four), leaving a core to the event loop.
+ */
+export function analysisWorkerCount(cores: number, configured: string | undefined): number {
+  if (configured === undefined || configured === "") return Math.max(1, Math.min(4, cores - 1));
   const n = Number(configured);
   return Number.isInteger(n) && n >= 0 ? Math.min(n, 16) : 1;
 }
 
-type Job = { id: number; resolve: (o: AnalysisOutcome) => void; reject: (e: unknown) => void };
-type Slot = { worker: Worker; jobs: Map<number, Job> };
+/** How many analyses may wait for a worker (KB_ANALYSIS_QUEUE, default 8); beyond that the answer is 429. */
+export function analysisQueueLimit(configured: string | undefined): number {
+  if (configured === undefined || configured === "") return 8;
+  const n = Number(configured);
+  return Number.isInteger(n) && n >= 0 ? Math.min(n, 1000) : 8;
+}
+
+type Pending = { job: AnalysisJob; resolve: (o: AnalysisOutcome) => void; reject: (e: unknown) => void };
+type Slot = { worker: Worker; current: (Pending & { startedAt: number }) | null };
+
+/** Refused because every worker is busy and the queue is full; Retry-After says when to come back. */
+export class AnalysisBusyError extends HttpError {
+  constructor(readonly retryAfterSeconds: number) {
+    super(429, "busy", "The analysis queue is full; try again shortly.", undefined, undefined, { "retry-after": String(retryAfterSeconds) });
+  }
+}
 
 class AnalysisPool {
   private slots: Slot[] = [];
-  private nextId = 1;
+  private waiting: Pending[] = [];
+  // Running mean of one job's time in a worker, for Retry-After.
+  private meanJobMs = 50;
 
-  constructor(private readonly size: number) {}
+  constructor(
+    private readonly size: number,
+    private readonly queueLimit: number,
+  ) {}
 
   private spawn(): Slot {
     const entry = new URL("./analysis-worker.ts", import.meta.url);
@@ -29,17 +49,23 @@ class AnalysisPool {
     const worker = process.env.KB_ANALYSIS_WORKER_TSX === "1"
       ? new Worker(`import("tsx/esm/api").then((tsx) => tsx.tsImport(${JSON.stringify(entry.href)}, ${JSON.stringify(entry.href)}))`, { eval: true })
       : new Worker(entry);
-    const slot: Slot = { worker, jobs: new Map() };
-    worker.on("message", (m: { id: number; outcome: AnalysisOutcome }) => {
-      const job = slot.jobs.get(m.id);
-      slot.jobs.delete(m.id);
-      job?.resolve(m.outcome);
+    const slot: Slot = { worker, current: null };
+    worker.on("message", (m: { outcome: AnalysisOutcome }) => {
+      const done = slot.current;
+      slot.current = null;
+      if (done) {
+        this.meanJobMs = 0.8 * this.meanJobMs + 0.2 * (performance.now() - done.startedAt);
+        done.resolve(m.outcome);
+      }
+      this.dispatch();
     });
     const retire = (error: unknown) => {
-      // A worker that dies fails only its own jobs; the next request starts a fresh one.
+      // A worker that dies fails only its own job; the next dispatch starts a fresh one.
+      if (!this.slots.includes(slot)) return;
       this.slots = this.slots.filter((s) => s !== slot);
-      for (const job of slot.jobs.values()) job.reject(error);
-      slot.jobs.clear();
+      slot.current?.reject(error);
+      slot.current = null;
+      this.dispatch();
     };
     worker.on("error", retire);
     worker.on("exit", (code) => retire(new Error(`analysis worker exited with code ${code}`)));
@@ -48,13 +74,28 @@ class AnalysisPool {
     return slot;
   }
 
+  /** Hands waiting jobs to idle workers, one job per worker at a time. */
+  private dispatch(): void {
+    while (this.waiting.length > 0) {
+      while (this.slots.length < this.size) this.spawn();
+      const idle = this.slots.find((s) => s.current === null);
+      if (!idle) return;
+      const next = this.waiting.shift()!;
+      idle.current = { ...next, startedAt: performance.now() };
+      idle.worker.postMessage({ job: next.job });
+    }
+  }
+
   run(job: AnalysisJob): Promise<AnalysisOutcome> {
-    while (this.slots.length < this.size) this.spawn();
-    const slot = this.slots.reduce((a, b) => (b.jobs.size < a.jobs.size ? b : a));
-    const id = this.nextId++;
+    const busy = this.slots.filter((s) => s.current !== null).length;
+    if (busy >= this.size && this.waiting.length >= this.queueLimit) {
+      // Time for what is ahead to drain, rounded up to whole seconds.
+      const aheadMs = ((this.waiting.length + busy) / this.size) * this.meanJobMs;
+      throw new AnalysisBusyError(Math.max(1, Math.ceil(aheadMs / 1000)));
+    }
     return new Promise<AnalysisOutcome>((resolve, reject) => {
-      slot.jobs.set(id, { id, resolve, reject });
-      slot.worker.postMessage({ id, job });
+      this.waiting.push({ job, resolve, reject });
+      this.dispatch();
     });
   }
 }
@@ -63,19 +104,24 @@ const globalForPool = globalThis as unknown as { knucklebenchAnalysisPool?: Anal
 
 function pool(): AnalysisPool | null {
   if (globalForPool.knucklebenchAnalysisPool === undefined) {
-    const size = poolSize();
-    globalForPool.knucklebenchAnalysisPool = size > 0 ? new AnalysisPool(size) : null;
+    const size = analysisWorkerCount(availableParallelism(), process.env.KB_ANALYSIS_WORKERS);
+    globalForPool.knucklebenchAnalysisPool = size > 0 ? new AnalysisPool(size, analysisQueueLimit(process.env.KB_ANALYSIS_QUEUE)) : null;
   }
   return globalForPool.knucklebenchAnalysisPool;
 }
 
 /**
  * Runs one analysis job — in a worker thread when the pool has any, so a burst of analyses does not stall
- * the event loop — and answers its JSON, or throws the job's 422 as an HttpError.
+ * the event loop — and answers its JSON, or throws the job's 422 (or the full queue's 429) as an HttpError.
  */
 export async function analysisResponse(job: AnalysisJob): Promise<Response> {
-  const workers = pool();
-  const outcome = workers ? await workers.run(job) : runAnalysisJob(job);
+  const outcome = await runAnalysis(job);
   if (outcome.ok) return new Response(outcome.json, { headers: { "content-type": "application/json" } });
   throw new HttpError(outcome.status, outcome.code, outcome.message, outcome.fields, outcome.part ? { part: outcome.part, reason: outcome.reason } : undefined);
+}
+
+/** One job's outcome through the same workers (pages render their figures with it). */
+export async function runAnalysis(job: AnalysisJob): Promise<AnalysisOutcome> {
+  const workers = pool();
+  return workers ? workers.run(job) : runAnalysisJob(job);
 }

@@ -6,6 +6,7 @@ import { db } from "../db/client";
 import * as schema from "../db/schema";
 import { authSecret, env, trustedOrigins } from "../env";
 import { createPersonalWorkspace } from "../data/workspaces";
+import { CLIENT_ADDRESS_HEADER } from "../http/client-address";
 import { ac, roles } from "./access";
 
 export const auth = betterAuth({
@@ -30,6 +31,9 @@ export const auth = betterAuth({
   // No signed cookie cache: it would let a signed-out session be replayed for its whole max-age. The guard's
   // short per-instance memo (src/server/data/guard.ts) saves the database read instead.
   session: { expiresIn: 60 * 60 * 24 * 14, updateAge: 60 * 60 * 24 },
+  // Only the address the auth route resolved (src/server/http/client-address.ts); X-Forwarded-For as sent
+  // is anyone's to write. Without it better-auth pools every caller in one bucket, which fails closed.
+  advanced: { ipAddress: { ipAddressHeaders: [CLIENT_ADDRESS_HEADER] } },
   rateLimit: {
     // On in production by default; KB_AUTH_RATE_LIMIT forces it either way (tests switch it on).
     enabled: env.KB_AUTH_RATE_LIMIT ? env.KB_AUTH_RATE_LIMIT === "on" : env.NODE_ENV === "production",

@@ -10,6 +10,7 @@ export class HttpError extends Error {
     message: string,
     readonly fields?: FieldIssue[],
     readonly extra?: Record<string, unknown>,
+    readonly headers?: Record<string, string>,
   ) {
     super(message);
   }
@@ -41,5 +42,5 @@ export function invalid(error: z.ZodError, what = "body"): HttpError {
 
 export function errorResponse(error: HttpError): Response {
   const body = { error: { code: error.code, message: error.message, ...(error.fields ? { fields: error.fields } : {}), ...error.extra } };
-  return Response.json(body, { status: error.status });
+  return Response.json(body, { status: error.status, headers: error.headers });
 }
