@@ -6,7 +6,6 @@ import * as memberRoute from "@/app/api/workspaces/[workspaceId]/members/[member
 import * as kitsRoute from "@/app/api/workspaces/[workspaceId]/kits/route";
 import * as kitRoute from "@/app/api/workspaces/[workspaceId]/kits/[kitId]/route";
 import * as layoutRoute from "@/app/api/workspaces/[workspaceId]/kits/[kitId]/layout/route";
-import * as kitsListRoute from "@/app/api/workspaces/[workspaceId]/kits/route";
 import * as workspacesRoute from "@/app/api/workspaces/route";
 import { TARNWICK_10_BASE } from "@/contracts/demo-layouts";
 import { call, signUp } from "../helpers/api";
@@ -69,7 +68,7 @@ describe("control characters in stored strings are refused with the field named 
     }
     const kit = await call<K>(kitRoute.GET, "GET", `/api/workspaces/${ws}/kits/x`, { workspaceId: ws, kitId: "\u0000" }, { cookie: owner.cookie });
     expect(kit.status).toBe(404);
-    const workspace = await call<P>(kitsListRoute.GET, "GET", "/api/workspaces/x/kits", { workspaceId: "ws\u0000" }, { cookie: owner.cookie });
+    const workspace = await call<P>(kitsRoute.GET, "GET", "/api/workspaces/x/kits", { workspaceId: "ws\u0000" }, { cookie: owner.cookie });
     expect(workspace.status).toBe(404);
   });
 });
@@ -111,9 +110,10 @@ describe("over-deep JSON is refused before anything walks it (point 5)", () => {
     const deepButAllowed = await call(analyzeRoute.POST, "POST", "/api/analyze", {}, { cookie: owner.cookie, rawBody: `{"layout":${nested(63)}}` });
     expect(deepButAllowed.status).toBe(422);
     expect(deepButAllowed.json.error.code).toBe("invalid");
-    const brackets = await createKit({ name: `${"[{".repeat(60)}"\\`, scale: "1:10" });
+    // 102 characters of brackets, quote and backslash: within the 120-character name limit.
+    const brackets = await createKit({ name: `${"[{".repeat(50)}"\\`, scale: "1:10" });
     expect(brackets.status).toBe(201);
-    expect(brackets.json.kit.name).toBe(`${"[{".repeat(60)}"\\`);
+    expect(brackets.json.kit.name).toBe(`${"[{".repeat(50)}"\\`);
   });
 });
 
