@@ -4,13 +4,29 @@ import { isStorableText, storableTextMessage } from "./text";
 
 const role = z.enum(WORKSPACE_ROLES, { error: `Role must be one of ${WORKSPACE_ROLES.join(", ")}` });
 
-export const memberAddBody = z
+/** An invitation to join a workspace: POST /api/workspaces/[workspaceId]/members. The address is kept lower-case. */
+export const invitationCreateBody = z
   .object({
-    email: z.string({ error: "E-mail is required" }).trim().toLowerCase().email("Enter a valid e-mail address").max(254),
+    email: z.string({ error: "E-mail is required" }).trim().toLowerCase().email("Enter a valid e-mail address").max(254, "E-mail must be at most 254 characters"),
     role,
   })
   .strict();
-export type MemberAddBody = z.infer<typeof memberAddBody>;
+export type InvitationCreateBody = z.infer<typeof invitationCreateBody>;
+
+/**
+ * The answer to an invitation, the same whether or not the address has an account or is a member already,
+ * so the answer tells nothing about who uses the product.
+ */
+export type InvitationSent = { email: string; role: string; status: "pending" };
+
+/** A pending invitation as a workspace's admins see it. */
+export type WorkspaceInvitationRow = { id: string; email: string; role: string; invitedBy: string; createdAt: string; expiresAt: string };
+
+/** A pending invitation as the invited person sees it. */
+export type MyInvitationRow = { id: string; workspace: { id: string; name: string }; role: string; invitedBy: string; createdAt: string; expiresAt: string };
+
+/** An invitation id in a path (UUIDs; better-auth's ids are letters and digits). Anything else is not there. */
+export const invitationIdParam = z.string().regex(/^[A-Za-z0-9_-]{1,64}$/);
 
 export const memberRoleBody = z.object({ role }).strict();
 

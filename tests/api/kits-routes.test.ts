@@ -3,10 +3,10 @@ import { beforeAll, describe, expect, it } from "vitest";
 import * as kitsRoute from "@/app/api/workspaces/[workspaceId]/kits/route";
 import * as kitRoute from "@/app/api/workspaces/[workspaceId]/kits/[kitId]/route";
 import * as layoutRoute from "@/app/api/workspaces/[workspaceId]/kits/[kitId]/layout/route";
-import * as membersRoute from "@/app/api/workspaces/[workspaceId]/members/route";
 import * as workspacesRoute from "@/app/api/workspaces/route";
 import { TARNWICK_10_BASE, TARNWICK_10_THIN_NECK } from "@/contracts/demo-layouts";
 import { call, signUp } from "../helpers/api";
+import { addMemberByInvitation } from "../helpers/invitations";
 
 type P = { workspaceId: string };
 type K = { workspaceId: string; kitId: string };
@@ -36,11 +36,7 @@ beforeAll(async () => {
   outsider = await signUp("Otto Brask");
   ws = await personalWorkspace(owner.cookie);
   outsiderWs = await personalWorkspace(outsider.cookie);
-  for (const [who, role] of [[editor, "editor"], [viewer, "viewer"]] as const) {
-    const res = await call<P>(membersRoute.POST, "POST", `/api/workspaces/${ws}/members`, { workspaceId: ws }, { cookie: owner.cookie, body: { email: who.email, role } });
-    expect(res.status).toBe(201);
-    expect(res.json.member.role).toBe(role);
-  }
+  for (const [who, role] of [[editor, "editor"], [viewer, "viewer"]] as const) await addMemberByInvitation(owner, ws, who, role);
   const created = await call<P>(kitsRoute.POST, "POST", kitsPath(ws), { workspaceId: ws }, { cookie: owner.cookie, body: { name: "Gantry 8 front", scale: "1:8" } });
   expect(created.status).toBe(201);
   kitId = created.json.kit.id;

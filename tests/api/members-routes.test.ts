@@ -3,6 +3,7 @@ import * as memberRoute from "@/app/api/workspaces/[workspaceId]/members/[member
 import * as membersRoute from "@/app/api/workspaces/[workspaceId]/members/route";
 import * as workspacesRoute from "@/app/api/workspaces/route";
 import { call, signUp } from "../helpers/api";
+import { addMemberByInvitation, invite } from "../helpers/invitations";
 
 type P = { workspaceId: string };
 type M = { workspaceId: string; memberId: string };
@@ -29,36 +30,46 @@ beforeAll(async () => {
 });
 
 describe("members", () => {
-  it("an owner adds an existing user by e-mail with a role", async () => {
-    const res = await call<P>(membersRoute.POST, "POST", path(), { workspaceId: ws }, { cookie: owner.cookie, body: { email: admin.email.toUpperCase(), role: "admin" } });
-    expect(res.status).toBe(201);
-    expect(res.json.member).toMatchObject({ email: admin.email, role: "admin", name: "Aksel Brun" });
+  it("an owner invites by e-mail with a role; the invitee is a member only once they accept", async () => {
+    const sent = await invite(owner, ws, admin.email.toUpperCase(), "admin");
+    expect(sent.status).toBe(202);
+    expect(sent.json).toEqual({ invitation: { email: admin.email, role: "admin", status: "pending" } });
+    const before = await call<P>(membersRoute.GET, "GET", path(), { workspaceId: ws }, { cookie: owner.cookie });
+    expect(before.json.members.map((m: { email: string }) => m.email)).toEqual([owner.email]);
+    await addMemberByInvitation(owner, ws, admin, "admin");
+    const after = await call<P>(membersRoute.GET, "GET", path(), { workspaceId: ws }, { cookie: owner.cookie });
+    expect(after.json.members.find((m: { email: string }) => m.email === admin.email)).toMatchObject({ role: "admin", name: "Aksel Brun" });
   });
 
-  it("an admin adds an editor, but may not grant owner", async () => {
-    const ok = await call<P>(membersRoute.POST, "POST", path(), { workspaceId: ws }, { cookie: admin.cookie, body: { email: editor.email, role: "editor" } });
-    expect(ok.status).toBe(201);
+  it("an admin invites an editor, but may not grant owner", async () => {
+    const asOwner = await invite(admin, ws, "someone@test.example", "owner");
+    expect(asOwner.status).toBe(403);
+    expect(asOwner.json.error.fields[0].path).toBe("role");
+    await addMemberByInvitation(admin, ws, editor, "editor");
     const owner2 = await call<M>(memberRoute.PATCH, "PATCH", `${path()}/x`, { workspaceId: ws, memberId: await memberIdOf(editor.email) }, { cookie: admin.cookie, body: { role: "owner" } });
     expect(owner2.status).toBe(403);
   });
 
-  it("an editor may list members but not add or remove them", async () => {
+  it("an editor may list members but not invite or remove them", async () => {
     const list = await call<P>(membersRoute.GET, "GET", path(), { workspaceId: ws }, { cookie: editor.cookie });
     expect(list.status).toBe(200);
     expect(list.json.members.map((m: { role: string }) => m.role).sort()).toEqual(["admin", "editor", "owner"]);
-    const add = await call<P>(membersRoute.POST, "POST", path(), { workspaceId: ws }, { cookie: editor.cookie, body: { email: owner.email, role: "viewer" } });
+    const add = await invite(editor, ws, "someone-else@test.example", "viewer");
     expect(add.status).toBe(403);
   });
 
-  it("unknown e-mail → 404 naming email; duplicate → 409; bad role → 422 naming role", async () => {
-    const unknown = await call<P>(membersRoute.POST, "POST", path(), { workspaceId: ws }, { cookie: owner.cookie, body: { email: "ghost@test.example", role: "viewer" } });
-    expect(unknown.status).toBe(404);
-    expect(unknown.json.error.fields[0].path).toBe("email");
-    const dup = await call<P>(membersRoute.POST, "POST", path(), { workspaceId: ws }, { cookie: owner.cookie, body: { email: editor.email, role: "viewer" } });
-    expect(dup.status).toBe(409);
-    const bad = await call<P>(membersRoute.POST, "POST", path(), { workspaceId: ws }, { cookie: owner.cookie, body: { email: editor.email, role: "superuser" } });
+  it("inviting a member again answers the same way and leaves their role; bad role → 422 naming role; bad e-mail → 422 naming email", async () => {
+    const again = await invite(owner, ws, editor.email, "viewer");
+    expect(again.status).toBe(202);
+    expect(again.json).toEqual({ invitation: { email: editor.email, role: "viewer", status: "pending" } });
+    const list = await call<P>(membersRoute.GET, "GET", path(), { workspaceId: ws }, { cookie: owner.cookie });
+    expect(list.json.members.find((m: { email: string }) => m.email === editor.email).role).toBe("editor");
+    const bad = await invite(owner, ws, editor.email, "superuser");
     expect(bad.status).toBe(422);
     expect(bad.json.error.fields[0].path).toBe("role");
+    const badEmail = await invite(owner, ws, "not-an-address", "viewer");
+    expect(badEmail.status).toBe(422);
+    expect(badEmail.json.error.fields[0].path).toBe("email");
   });
 
   it("the last owner cannot be demoted or removed", async () => {

@@ -4,7 +4,7 @@
 import { randomUUID } from "node:crypto";
 import { beforeAll, describe, expect, it } from "vitest";
 import { blockingViolations, expectAccessible } from "./helpers/a11y";
-import { apiAs, pageAs as openAs, signUpByApi, type Account } from "./helpers/accounts";
+import { addMemberByInvitation, apiAs, pageAs as openAs, signUpByApi, type Account } from "./helpers/accounts";
 import { setUpBrowser } from "./helpers/browser";
 
 const browser = setUpBrowser();
@@ -153,10 +153,13 @@ describe("signed-in pages", () => {
   });
 
   it("members, as the owner, with a second member", async () => {
-    await apiAs(owner, `/api/workspaces/${workspaceId}/members`, { method: "POST", body: { email: collaborator.email, role: "editor" } });
+    await addMemberByInvitation(owner, workspaceId, collaborator, "editor");
+    // And one invitation still waiting, so the pending list is checked too.
+    await apiAs(owner, `/api/workspaces/${workspaceId}/members`, { method: "POST", body: { email: "waiting@test.example", role: "viewer" } });
     const page = await pageAs(owner);
     await page.goto(`/workspaces/${workspaceId}/members`);
     await page.getByRole("combobox", { name: "Role of Jonas Pell" }).waitFor();
+    await page.getByRole("button", { name: "Withdraw the invitation to waiting@test.example" }).waitFor();
     await expectAccessible(page, { name: "members-owner" });
   });
 

@@ -8,7 +8,7 @@ import type { Page } from "playwright-core";
 import { beforeAll, describe, expect, it } from "vitest";
 import { DEMO_LAYOUTS } from "@/contracts/demo-layouts";
 import { expectAccessible } from "./helpers/a11y";
-import { apiAs, pageAs, signUpByApi, type Account } from "./helpers/accounts";
+import { addMemberByInvitation, apiAs, pageAs, signUpByApi, type Account } from "./helpers/accounts";
 import { setUpBrowser } from "./helpers/browser";
 
 const browser = setUpBrowser();
@@ -262,7 +262,7 @@ describe("the kit editor", () => {
   it("a viewer previews and reads everything, and no control offers a write", async () => {
     const kit = await newDemoKit("Viewer corner");
     const viewer = await signUpByApi("Ola Viewer");
-    await apiAs(owner, `/api/workspaces/${workspaceId}/members`, { method: "POST", body: { email: viewer.email, role: "viewer" } });
+    await addMemberByInvitation(owner, workspaceId, viewer, "viewer");
     const page = await pageAs(browser, viewer, { width: 1280, height: 800 });
     await openEditor(page, kit.id);
     await page.getByTestId("read-only-badge").waitFor();

@@ -7,7 +7,6 @@ import { db } from "../db/client";
 import { members, sessions, users, workspaces } from "../db/schema";
 import { HttpError } from "../http/errors";
 
-
 function slugFrom(name: string): string {
   const base = name.toLowerCase().normalize("NFKD").replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "").slice(0, 40) || "workspace";
   return `${base}-${randomUUID().slice(0, 8)}`;
@@ -67,29 +66,11 @@ async function ownerCount(tx: Tx, workspaceId: string): Promise<number> {
   return row?.n ?? 0;
 }
 
-function assertMayGrant(actorRole: string, role: WorkspaceRole) {
+/** Refuses a grant of owner by anyone but an owner (a role change or an invitation). */
+export function assertMayGrant(actorRole: string, role: WorkspaceRole) {
   if (role === "owner" && actorRole !== "owner") {
     throw new HttpError(403, "forbidden", "Only an owner may make someone an owner.", [{ path: "role", message: "Only an owner may grant owner" }]);
   }
-}
-
-/** Adds an existing user (by e-mail) to the workspace. Invitations by e-mail are a separate flow. */
-export async function addMemberByEmail(workspaceId: string, actorRole: string, email: string, role: WorkspaceRole): Promise<MemberRow> {
-  assertMayGrant(actorRole, role);
-  const [user] = await db.select({ id: users.id }).from(users).where(eq(users.email, email.toLowerCase())).limit(1);
-  if (!user) {
-    throw new HttpError(404, "no_such_user", `No one has signed up with ${email} yet.`, [{ path: "email", message: "No account uses this e-mail address" }]);
-  }
-  const inserted = await db
-    .insert(members)
-    .values({ id: randomUUID(), organizationId: workspaceId, userId: user.id, role })
-    .onConflictDoNothing()
-    .returning({ id: members.id });
-  if (inserted.length === 0) {
-    throw new HttpError(409, "already_member", `${email} is already a member of this workspace.`, [{ path: "email", message: "Already a member" }]);
-  }
-  const rows = await listMembers(workspaceId);
-  return rows.find((r) => r.id === inserted[0]!.id)!;
 }
 
 async function memberOf(tx: Tx, workspaceId: string, memberId: string) {

@@ -46,6 +46,15 @@ export async function apiAs<T>(account: Account, path: string, init: { method?: 
   return (res.status === 204 ? undefined : await res.json()) as T;
 }
 
+/** Makes `account` a member the way a person joins: `owner` invites the address, the invitee accepts. */
+export async function addMemberByInvitation(owner: Account, workspaceId: string, account: Account, role: string): Promise<void> {
+  await apiAs(owner, `/api/workspaces/${workspaceId}/members`, { method: "POST", body: { email: account.email, role } });
+  const { invitations } = await apiAs<{ invitations: { id: string; workspace: { id: string } }[] }>(account, "/api/me/invitations");
+  const invitation = invitations.find((i) => i.workspace.id === workspaceId);
+  if (!invitation) throw new Error(`no open invitation for ${account.email} to ${workspaceId}`);
+  await apiAs(account, `/api/me/invitations/${invitation.id}/accept`, { method: "POST" });
+}
+
 export async function pageAs(browser: BrowserHarness, account: Account, viewport?: { width: number; height: number }): Promise<Page> {
   const page = await browser.newPage(viewport);
   await page.context().addCookies(account.cookies.map((c) => ({ ...c, url: baseUrl })));

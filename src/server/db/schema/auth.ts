@@ -1,5 +1,6 @@
 // Tables better-auth reads and writes (core + organization plugin). Field names are the ones
 // better-auth expects; column names are snake_case. The organization model is our "workspace".
+import { sql } from "drizzle-orm";
 import { bigint, boolean, index, integer, pgTable, text, timestamp, uniqueIndex } from "drizzle-orm/pg-core";
 
 const createdAt = () => timestamp("created_at", { withTimezone: true }).notNull().defaultNow();
@@ -105,5 +106,10 @@ export const invitations = pgTable(
     inviterId: text("inviter_id").notNull().references(() => users.id, { onDelete: "cascade" }),
     createdAt: createdAt(),
   },
-  (t) => [index("workspace_invitations_workspace_idx").on(t.organizationId), index("workspace_invitations_email_idx").on(t.email)],
+  (t) => [
+    index("workspace_invitations_workspace_idx").on(t.organizationId),
+    index("workspace_invitations_email_idx").on(t.email),
+    // At most one pending invitation per address and workspace: inviting again updates it (src/server/data/invitations.ts).
+    uniqueIndex("workspace_invitations_pending_idx").on(t.organizationId, t.email).where(sql`${t.status} = 'pending'`),
+  ],
 );

@@ -1,7 +1,9 @@
 import type { Metadata } from "next";
 import { roleCan } from "@/contracts/roles";
+import { listMyInvitations } from "@/server/data/invitations";
 import { pageWorkspace } from "@/server/data/page-access";
 import { KitsPanel } from "./_components/kits-panel";
+import { MyInvitations } from "./_components/my-invitations";
 
 export const metadata: Metadata = { title: "Kits" };
 
@@ -9,10 +11,14 @@ export default async function KitsPage({ params }: { params: Promise<{ workspace
   const { workspaceId } = await params;
   const access = await pageWorkspace(workspaceId, "kit", "read", `/workspaces/${workspaceId}/kits`);
   return (
-    <KitsPanel
-      workspaceId={access.workspace.id}
-      workspaceName={access.workspace.name}
-      canWrite={roleCan(access.role, "kit", "create")}
-    />
+    <>
+      {/* Where everyone lands after signing in (/kits opens it), so an invitation is seen there. */}
+      <MyInvitations initial={await listMyInvitations(access.user)} />
+      <KitsPanel
+        workspaceId={access.workspace.id}
+        workspaceName={access.workspace.name}
+        canWrite={roleCan(access.role, "kit", "create")}
+      />
+    </>
   );
 }

@@ -1,5 +1,6 @@
-import { memberAddBody } from "@/contracts/workspaces";
-import { addMemberByEmail, listMembers } from "@/server/data/workspaces";
+import { invitationCreateBody } from "@/contracts/workspaces";
+import { inviteToWorkspace } from "@/server/data/invitations";
+import { listMembers } from "@/server/data/workspaces";
 import { readJson } from "@/server/http/body";
 import { workspaceRoute } from "@/server/http/route";
 
@@ -9,8 +10,10 @@ export const GET = workspaceRoute<Params, "member">("member", "read", async (_re
   return Response.json({ members: await listMembers(access.workspace.id), yourRole: access.role });
 });
 
-export const POST = workspaceRoute<Params, "member">("member", "create", async (req, access) => {
-  const { email, role } = await readJson(req, memberAddBody);
-  const member = await addMemberByEmail(access.workspace.id, access.role, email, role);
-  return Response.json({ member }, { status: 201 });
+// Adding someone is an invitation they accept (POST /api/me/invitations/[id]/accept). 202 with the same body
+// whether or not the address has an account or is already a member: the answer reveals neither.
+export const POST = workspaceRoute<Params, "invitation">("invitation", "create", async (req, access) => {
+  const { email, role } = await readJson(req, invitationCreateBody);
+  const invitation = await inviteToWorkspace(access.workspace.id, { userId: access.user.id, role: access.role }, email, role);
+  return Response.json({ invitation }, { status: 202 });
 });

@@ -6,7 +6,7 @@ import { Button, Spinner } from "@/components/ui/button";
 import { SelectField, TextField } from "@/components/ui/field";
 import { ErrorNotice } from "@/components/ui/notice";
 import { ROLE_DESCRIPTIONS, WORKSPACE_ROLES } from "@/contracts/roles";
-import { memberAddBody, type MemberAddBody, type MemberRow } from "@/contracts/workspaces";
+import { invitationCreateBody, type InvitationCreateBody, type InvitationSent, type MemberRow, type WorkspaceInvitationRow } from "@/contracts/workspaces";
 import { api, ApiError } from "@/lib/api-client";
 import { queryKeys } from "@/lib/query-keys";
 
@@ -79,38 +79,91 @@ export function MembersPanel({ workspaceId, workspaceName, myUserId, myRole, can
           {WORKSPACE_ROLES.map((r) => <div key={r}><dt className="inline font-medium">{r}: </dt><dd className="inline">{ROLE_DESCRIPTIONS[r]}</dd></div>)}
         </dl>
       </section>
-      {canManage ? <AddMemberForm workspaceId={workspaceId} roles={grantable} onAdded={refresh} /> : null}
+      {canManage ? (
+        <div className="flex flex-col gap-6">
+          <InviteForm workspaceId={workspaceId} roles={grantable} />
+          <PendingInvitations workspaceId={workspaceId} myRole={myRole} />
+        </div>
+      ) : null}
     </div>
   );
 }
 
-function AddMemberForm({ workspaceId, roles, onAdded }: { workspaceId: string; roles: readonly string[]; onAdded: () => Promise<void> }) {
-  const { register, handleSubmit, formState, reset, setError } = useForm<MemberAddBody>({
-    resolver: zodResolver(memberAddBody),
+function InviteForm({ workspaceId, roles }: { workspaceId: string; roles: readonly string[] }) {
+  const queryClient = useQueryClient();
+  const { register, handleSubmit, formState, reset, setError } = useForm<InvitationCreateBody>({
+    resolver: zodResolver(invitationCreateBody),
     defaultValues: { email: "", role: "editor" },
   });
-  const add = useMutation({
-    mutationFn: (v: MemberAddBody) => api(`/api/workspaces/${workspaceId}/members`, { method: "POST", body: v }),
+  const send = useMutation({
+    mutationFn: (v: InvitationCreateBody) => api<{ invitation: InvitationSent }>(`/api/workspaces/${workspaceId}/members`, { method: "POST", body: v }),
     onSuccess: () => {
       reset();
-      return onAdded();
+      return queryClient.invalidateQueries({ queryKey: queryKeys.invitations(workspaceId) });
     },
     onError: (error) => {
-      if (error instanceof ApiError) for (const f of error.fields) if (f.path === "email" || f.path === "role") setError(f.path, { message: error.message });
+      if (error instanceof ApiError) for (const f of error.fields) if (f.path === "email" || f.path === "role") setError(f.path, { message: f.message });
     },
   });
   return (
     <aside className="h-fit rounded-lg border border-ink/10 bg-white p-4">
-      <form onSubmit={handleSubmit((v) => add.mutate(v))} noValidate className="flex flex-col gap-3" aria-label="Add member">
-        <h2 className="font-semibold">Add a member</h2>
-        <p className="text-xs text-ink-muted">They need an account already. Invitations by e-mail come later.</p>
-        {add.isError && !(add.error instanceof ApiError && add.error.fields.length) ? <ErrorNotice title="Could not add" message={add.error.message} /> : null}
-        <TextField id="member-email" label="E-mail" type="email" error={formState.errors.email?.message} {...register("email")} />
-        <SelectField id="member-role" label="Role" error={formState.errors.role?.message} {...register("role")}>
+      <form onSubmit={handleSubmit((v) => send.mutate(v))} noValidate className="flex flex-col gap-3" aria-label="Invite someone">
+        <h2 className="font-semibold">Invite someone</h2>
+        <p className="text-xs text-ink-muted">They join once they sign in with this address and accept. An invitation stays open for 7 days.</p>
+        {send.isError && !(send.error instanceof ApiError && send.error.fields.length) ? <ErrorNotice title="Could not invite" message={send.error.message} /> : null}
+        {send.isSuccess ? (
+          <p role="status" className="rounded-md border border-ink/10 bg-paper px-3 py-2 text-sm">
+            Invitation to <span className="font-medium">{send.data.invitation.email}</span> as {send.data.invitation.role} is waiting for their answer.
+          </p>
+        ) : null}
+        <TextField id="invite-email" label="E-mail" type="email" autoComplete="off" error={formState.errors.email?.message} {...register("email")} />
+        <SelectField id="invite-role" label="Role" error={formState.errors.role?.message} {...register("role")}>
           {roles.map((r) => <option key={r} value={r}>{r}</option>)}
         </SelectField>
-        <Button type="submit" busy={add.isPending}>Add member</Button>
+        <Button type="submit" busy={send.isPending}>Invite</Button>
       </form>
     </aside>
+  );
+}
+
+const dateFormat = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "short", year: "numeric" });
+
+function PendingInvitations({ workspaceId, myRole }: { workspaceId: string; myRole: string }) {
+  const queryClient = useQueryClient();
+  const key = queryKeys.invitations(workspaceId);
+  const pending = useQuery({
+    queryKey: key,
+    queryFn: ({ signal }) => api<{ invitations: WorkspaceInvitationRow[] }>(`/api/workspaces/${workspaceId}/invitations`, { signal }).then((r) => r.invitations),
+  });
+  const revoke = useMutation({
+    mutationFn: (id: string) => api(`/api/workspaces/${workspaceId}/invitations/${id}`, { method: "DELETE" }),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: key }),
+  });
+  return (
+    <section aria-labelledby="pending-heading" className="rounded-lg border border-ink/10 bg-white p-4">
+      <h2 id="pending-heading" className="mb-2 font-semibold">Pending invitations</h2>
+      {revoke.isError ? <ErrorNotice title="Could not withdraw the invitation" message={revoke.error.message} /> : null}
+      {pending.isPending ? (
+        <p className="text-sm text-ink-muted"><Spinner label="Loading invitations…" /></p>
+      ) : pending.isError ? (
+        <ErrorNotice title="Could not load the invitations" message={pending.error.message} onRetry={() => pending.refetch()} />
+      ) : pending.data.length === 0 ? (
+        <p className="text-sm text-ink-muted">No one is waiting to answer.</p>
+      ) : (
+        <ul aria-label="Pending invitations" className="divide-y divide-ink/10 text-sm">
+          {pending.data.map((inv) => (
+            <li key={inv.id} className="flex items-center justify-between gap-2 py-2">
+              <div className="min-w-0">
+                <p className="truncate font-medium" title={inv.email}>{inv.email}</p>
+                <p className="text-xs text-ink-muted">{inv.role} · invited by {inv.invitedBy} · open until {dateFormat.format(new Date(inv.expiresAt))}</p>
+              </div>
+              {inv.role !== "owner" || myRole === "owner" ? (
+                <Button variant="ghost" onClick={() => revoke.mutate(inv.id)} disabled={revoke.isPending} aria-label={`Withdraw the invitation to ${inv.email}`}>Withdraw</Button>
+              ) : null}
+            </li>
+          ))}
+        </ul>
+      )}
+    </section>
   );
 }

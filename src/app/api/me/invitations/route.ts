@@ -1,0 +1,4 @@
+import { listMyInvitations } from "@/server/data/invitations";
+import { sessionRoute } from "@/server/http/route";
+
+export const GET = sessionRoute<object>(async (_req, signed) => Response.json({ invitations: await listMyInvitations(signed.user) }));
