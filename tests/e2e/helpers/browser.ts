@@ -9,25 +9,11 @@ import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { chromium, type Browser, type BrowserContext, type Page } from "playwright-core";
 import { afterAll, afterEach } from "vitest";
+import { chromiumLaunchOptions } from "../../../scripts/lib/chromium";
 
 export const baseUrl = process.env.E2E_BASE_URL ?? "http://127.0.0.1:3100";
 
-const executablePath = process.env.CHROMIUM_PATH ?? "/usr/bin/chromium";
 const shotsDir = fileURLToPath(new URL("../../../.data/e2e-shots", import.meta.url));
-const isRoot = process.getuid?.() === 0;
-
-// Quiet and offline: without these Chromium keeps reaching for the network (updates, sync, QUIC).
-// Playwright itself gives every launch a fresh --user-data-dir in a temp folder and removes it after.
-const args = [
-  "--headless=new",
-  "--disable-gpu",
-  "--disable-quic",
-  "--no-first-run",
-  "--disable-background-networking",
-  "--disable-component-update",
-  "--disable-sync",
-  ...(isRoot ? ["--no-sandbox"] : []),
-];
 
 export interface BrowserHarness {
   /** A page in a new, isolated context whose relative URLs resolve against the app. */
@@ -60,7 +46,7 @@ export function setUpBrowser(): BrowserHarness {
 
   return {
     async newPage(viewport) {
-      browser ??= await chromium.launch({ executablePath, headless: true, args });
+      browser ??= await chromium.launch(chromiumLaunchOptions);
       const context = await browser.newContext({ baseURL: baseUrl, ...(viewport ? { viewport } : {}) });
       contexts.push(context);
       return context.newPage();
