@@ -1,8 +1,10 @@
 #!/usr/bin/env bash
 # `npm run bench`: performance checks.
 #  1. the engine benchmark (scripts/bench-engine.ts), in-process, no services;
-#  2. the HTTP benchmark (scripts/bench-http.ts, when it exists) against a production server on
-#     127.0.0.1:3200 with its own throwaway database (.data/pg-bench on 54349), stopped afterwards.
+#  2. the HTTP benchmark (scripts/bench-http.ts) and
+#  3. the browser benchmark (scripts/bench-browser.ts: the editor drag, the kit page), both against one
+#     production server on 127.0.0.1:3200 with its own throwaway database (.data/pg-bench on 54349),
+#     stopped afterwards.
 set -euo pipefail
 
 # shellcheck source=scripts/lib/runner.sh
@@ -25,20 +27,18 @@ else
   kb_say "no scripts/bench-engine.ts yet: engine benchmark skipped"
 fi
 
-# --- HTTP benchmark ---------------------------------------------------------------------------
-# scripts/bench-http.ts reads BENCH_BASE_URL (the server below) and DATABASE_URL (its own database,
-# migrated; seed it there if the benchmark needs data).
-if [[ -f scripts/bench-http.ts ]]; then
-  APP_PORT=$(kb_free_port 3200) || kb_die "no free port for the bench app (3200-3220)"
-  PG_PORT=$(kb_free_port 54349) || kb_die "no free port for the bench PostgreSQL (54349-54369)"
-  kb_env_bench "$APP_PORT"
-  unset DATABASE_URL # never benchmark against the user's database
-  kb_pg_start pg-bench "$PG_PORT" fresh
-  npx --no-install tsx scripts/migrate.ts
-  kb_next_build || kb_die "the build failed"
-  kb_app_start "$APP_PORT" .data/app-bench.log || kb_die "the app did not start (log: .data/app-bench.log)"
-  kb_say "HTTP benchmark against $BENCH_BASE_URL"
-  npx --no-install tsx scripts/bench-http.ts
-else
-  kb_say "no scripts/bench-http.ts yet: HTTP benchmark skipped"
-fi
+# --- HTTP and browser benchmarks ------------------------------------------------------------------
+# Both read BENCH_BASE_URL (the server below); DATABASE_URL is its own database, migrated (each
+# benchmark makes the accounts and kits it needs through the API).
+APP_PORT=$(kb_free_port 3200) || kb_die "no free port for the bench app (3200-3220)"
+PG_PORT=$(kb_free_port 54349) || kb_die "no free port for the bench PostgreSQL (54349-54369)"
+kb_env_bench "$APP_PORT"
+unset DATABASE_URL # never benchmark against the user's database
+kb_pg_start pg-bench "$PG_PORT" fresh
+npx --no-install tsx scripts/migrate.ts
+kb_next_build || kb_die "the build failed"
+kb_app_start "$APP_PORT" .data/app-bench.log || kb_die "the app did not start (log: .data/app-bench.log)"
+kb_say "HTTP benchmark against $BENCH_BASE_URL"
+npx --no-install tsx scripts/bench-http.ts
+kb_say "browser benchmark against $BENCH_BASE_URL"
+npx --no-install tsx scripts/bench-browser.ts
