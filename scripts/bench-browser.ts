@@ -45,26 +45,35 @@ const quantile = (xs: number[], q: number) => {
 };
 const ms = (x: number) => `${x.toFixed(1).padStart(6)} ms`;
 
-/** In the page: the time of every pointer move, and of every frame after the readouts took a current analysis. */
-function instrument() {
-  const w = window as unknown as { __kbBench: { moves: number[]; frames: number[]; watch: () => void } };
-  const bench = { moves: [] as number[], frames: [] as number[], watch() {} };
-  w.__kbBench = bench;
+/**
+ * In the page: the time of every pointer move, and of every frame after the readouts took a current analysis
+ * (on the blank page, of every frame). Plain source text: tsx would wrap named functions in a helper the page
+ * does not have.
+ */
+const INSTRUMENT = `(() => {
+  const bench = { moves: [], frames: [] };
+  window.__kbBench = bench;
   addEventListener("pointermove", (e) => { if (e.buttons) bench.moves.push(e.timeStamp); }, { capture: true });
-  bench.watch = () => {
-    const readouts = document.querySelector('[data-testid="readouts"]');
-    if (!readouts) {
-      // The blank baseline page: every frame counts.
-      const tick = (t: number) => { bench.frames.push(t); requestAnimationFrame(tick); };
-      requestAnimationFrame(tick);
-      return;
-    }
-    new MutationObserver(() => {
-      if (readouts.getAttribute("data-stale") !== "false") return;
-      requestAnimationFrame((t) => bench.frames.push(t));
-    }).observe(readouts, { attributes: true, attributeFilter: ["data-seq"] });
+  const readouts = document.querySelector('[data-testid="readouts"]');
+  if (!readouts) {
+    const tick = (t) => { bench.frames.push(t); requestAnimationFrame(tick); };
+    requestAnimationFrame(tick);
+    return;
+  }
+  new MutationObserver(() => {
+    if (readouts.getAttribute("data-stale") !== "false") return;
+    requestAnimationFrame((t) => bench.frames.push(t));
+  }).observe(readouts, { attributes: true, attributeFilter: ["data-seq"] });
+})()`;
+
+const FIGURE_WATCH = `(() => {
+  const look = (t) => {
+    const el = document.querySelector('[data-testid="steer-lock-worst"]');
+    if (el && el.offsetParent !== null && /\\d/.test(el.textContent || "")) window.__kbFigureAt = t;
+    else requestAnimationFrame(look);
   };
-}
+  requestAnimationFrame(look);
+})()`;
 
 /** Each move's latency: from the event to the first recorded frame after it. */
 function latencies(moves: number[], frames: number[]): number[] {
@@ -78,8 +87,7 @@ function latencies(moves: number[], frames: number[]): number[] {
 }
 
 async function drag(page: Page, from: { x: number; y: number }): Promise<number[]> {
-  await page.evaluate(instrument);
-  await page.evaluate(() => (window as unknown as { __kbBench: { watch(): void } }).__kbBench.watch());
+  await page.evaluate(INSTRUMENT);
   await page.mouse.move(from.x, from.y);
   await page.mouse.down();
   for (let i = 1; i <= MOVES; i++) {
@@ -148,16 +156,15 @@ try {
 
   // --- 2. the kit page: navigation → steer-lock figure visible, against first paint --------------
   const url = await kitUrl();
+  // Watched from the document's start (an init script), every frame, until the figure is laid out with a number.
+  await context.addInitScript(FIGURE_WATCH);
   const figure: number[] = [];
   const firstPaint: number[] = [];
   for (let i = 0; i <= LOADS; i++) {
     const page = await context.newPage();
     await page.goto(url, { waitUntil: "commit" });
-    const seen = await page.waitForFunction(() => {
-      const el = document.querySelector<HTMLElement>('[data-testid="steer-lock-worst"]');
-      return el && el.offsetParent !== null && /\d/.test(el.textContent ?? "") ? performance.now() : false;
-    }, undefined, { polling: "raf", timeout: 20_000 });
-    const at = (await seen.jsonValue()) as number;
+    await page.waitForFunction(() => (window as unknown as { __kbFigureAt?: number }).__kbFigureAt !== undefined, undefined, { timeout: 20_000 });
+    const at = await page.evaluate(() => (window as unknown as { __kbFigureAt: number }).__kbFigureAt);
     const paint = await page.evaluate(() => performance.getEntriesByName("first-contentful-paint")[0]?.startTime ?? Number.NaN);
     await page.close();
     if (i === 0) continue; // the first load pays for compiling the route's code

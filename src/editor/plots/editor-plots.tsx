@@ -1,7 +1,7 @@
 "use client";
 // The plots under the drawings, one tab each, all fed by the live figures. Picking a neck on the
 // trade-off writes it to the layout as one undo step (the panel and the drawings follow the store).
-import { useCallback } from "react";
+import { memo, useCallback, useDeferredValue } from "react";
 import { setNeckDiameter } from "../commands/edit-commands";
 import { useEditor, useEditorStore } from "../store/editor-context";
 import { TabSet } from "../workbench/tab-set";
@@ -10,24 +10,34 @@ import { JointEnvelopeMap } from "./joint-envelope-map";
 import { NeckTradeoffPlot } from "./neck-tradeoff-plot";
 import { TravelPlot } from "./travel-plot";
 
+// The plots take the live figures at low priority (useDeferredValue): while a handle is dragged, the
+// readouts and the drawings paint first and a plot catches up when the pointer leaves it a frame. Memoised,
+// so the urgent render that still carries the previous figures costs nothing.
+const Travel = memo(TravelPlot);
+const Envelope = memo(JointEnvelopeMap);
+const Ackermann = memo(AckermannPlot);
+
+function useDeferredLive() {
+  const analysis = useDeferredValue(useEditor((s) => s.live.analysis));
+  const stale = useDeferredValue(useEditor((s) => s.live.stale));
+  return { analysis, stale };
+}
+
 function LiveTravelPlot() {
-  const analysis = useEditor((s) => s.live.analysis);
-  const stale = useEditor((s) => s.live.stale);
+  const { analysis, stale } = useDeferredLive();
   const unit = useEditor((s) => s.settings.lengthUnit);
-  return <TravelPlot analysis={analysis} lengthUnit={unit} stale={stale} />;
+  return <Travel analysis={analysis} lengthUnit={unit} stale={stale} />;
 }
 
 function LiveEnvelopeMap() {
-  const analysis = useEditor((s) => s.live.analysis);
-  const stale = useEditor((s) => s.live.stale);
+  const { analysis, stale } = useDeferredLive();
   const unit = useEditor((s) => s.settings.lengthUnit);
-  return <JointEnvelopeMap analysis={analysis} lengthUnit={unit} stale={stale} />;
+  return <Envelope analysis={analysis} lengthUnit={unit} stale={stale} />;
 }
 
 function LiveAckermannPlot() {
-  const analysis = useEditor((s) => s.live.analysis);
-  const stale = useEditor((s) => s.live.stale);
-  return <AckermannPlot analysis={analysis} stale={stale} />;
+  const { analysis, stale } = useDeferredLive();
+  return <Ackermann analysis={analysis} stale={stale} />;
 }
 
 function LiveNeckTradeoff() {
