@@ -13,9 +13,7 @@ cleanup() {
   kb_app_stop
   kb_pg_stop
 }
-trap cleanup EXIT
-trap 'exit 130' INT
-trap 'exit 143' TERM
+kb_stop_on_exit cleanup
 
 kb_ensure_node_modules
 kb_env_common

@@ -3,13 +3,18 @@
 # Installs the dependencies if needed, starts PostgreSQL (data kept in .data/pg across runs),
 # migrates, seeds, builds, serves, and prints how to sign in. Ctrl-C (or SIGTERM) stops the app
 # and the database. DATABASE_URL, when set, points the demo at that database instead.
+#
+# For a second demo beside the first (the interrupt test of `npm test` runs one): KB_DEMO_PORT (app,
+# 3000), KB_DEMO_PG_PORT (54329), KB_DEMO_PG_NAME (the cluster's folder under .data, `pg`), and
+# KB_DEMO_BUILD=reuse to serve the existing .next build instead of building.
 set -euo pipefail
 
 # shellcheck source=scripts/lib/runner.sh
 source "$(dirname "$0")/lib/runner.sh"
 
-APP_PORT=3000
-PG_PORT=54329
+APP_PORT=${KB_DEMO_PORT:-3000}
+PG_PORT=${KB_DEMO_PG_PORT:-54329}
+PG_NAME=${KB_DEMO_PG_NAME:-pg}
 
 # shellcheck disable=SC2317 # both run from traps
 cleanup() {
@@ -18,12 +23,10 @@ cleanup() {
 }
 # shellcheck disable=SC2317
 on_signal() {
-  trap - INT TERM
   printf '\n'
-  exit 0
+  exit 0 # stopping on Ctrl-C is how the demo ends: not an error
 }
-trap cleanup EXIT
-trap on_signal INT TERM
+kb_stop_on_exit cleanup on_signal
 
 # Fail before touching anything when another program (another demo?) already serves the port.
 if kb_port_busy "$APP_PORT"; then
@@ -32,7 +35,7 @@ fi
 
 kb_ensure_node_modules
 kb_env_demo "$APP_PORT"
-kb_pg_start pg "$PG_PORT" keep
+kb_pg_start "$PG_NAME" "$PG_PORT" keep
 
 kb_say "applying migrations"
 npx --no-install tsx scripts/migrate.ts
@@ -43,7 +46,11 @@ SEED_OUTPUT=$(npx --no-install tsx --conditions=react-server scripts/seed.ts) ||
   kb_die "seeding failed"
 }
 
-kb_next_build || kb_die "the build failed (see above)"
+if [[ ${KB_DEMO_BUILD:-} == reuse && -s .next/BUILD_ID ]]; then
+  kb_say "serving the existing build (.next, KB_DEMO_BUILD=reuse)"
+else
+  kb_next_build || kb_die "the build failed (see above)"
+fi
 kb_app_start "$APP_PORT" || kb_die "the app did not start (see above)"
 
 cat <<EOF

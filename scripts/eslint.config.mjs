@@ -29,7 +29,7 @@ export default defineConfig([
     files: ["src/editor/**/*.{ts,tsx}", "src/components/**/*.{ts,tsx}", "src/lib/**/*.{ts,tsx}"],
     rules: {
       "no-restricted-imports": ["error", { patterns: [
-        { group: ["@/server/*", "@/app/*"], message: "Client code never imports the server or app." },
+        { group: ["@/server/*", "@/app/*", "server-only", "../../server/*", "../../app/*", "../../../server/*", "../../../app/*"], message: "Client code (editor, components, lib) never imports the server or app: the editor may import engine, contracts, lib and components." },
       ] }],
     },
   },

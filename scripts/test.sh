@@ -31,20 +31,17 @@ summarize() { # extra summarizer arguments
   SUMMARIZED=1
   node scripts/lib/summarize-results.mjs "${runs[@]}" "${FAILURES[@]}" "$@"
 }
-on_exit() {
-  local code=$?
+# shellcheck disable=SC2317 # both run from traps
+on_exit() { # EXIT_CODE
   cleanup
   # Stopped early (a setup step failed, or a signal): CI still gets its closing line.
-  if ((!SUMMARIZED)); then summarize --failure "npm test stopped early (exit code $code)" || true; fi
+  if ((!SUMMARIZED)); then summarize --failure "npm test stopped early (exit code $1)" || true; fi
 }
+# shellcheck disable=SC2317
 on_signal() {
-  trap - INT TERM
   kb_warn "interrupted: stopping what the tests started"
-  exit "$1"
 }
-trap on_exit EXIT
-trap 'on_signal 130' INT
-trap 'on_signal 143' TERM
+kb_stop_on_exit on_exit on_signal
 
 # --- what must be installed -------------------------------------------------------------------
 kb_data_dir

@@ -47,14 +47,15 @@ kb_pid_running() {
   [[ ${stat%% *} != Z ]]
 }
 
+# Marked done only once stopped: a signal that cuts a first call short leaves the exit trap's call to do it.
 kb_app_stop() {
   [[ -n $KB_APP_PID ]] || return 0
   local pid=$KB_APP_PID tries=0
-  KB_APP_PID=""
   kb_say "stopping the app"
   kill -TERM -- "-$pid" 2>/dev/null || kill -TERM "$pid" 2>/dev/null || true
   while kb_pid_running "$pid" && ((tries++ < 50)); do sleep 0.2; done
   # Whatever is left of its process group (workers) must not outlive it.
   kill -KILL -- "-$pid" 2>/dev/null || true
   wait "$pid" 2>/dev/null || true
+  KB_APP_PID=""
 }

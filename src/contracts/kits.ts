@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { isStorableText, PG_INTEGER_MAX, storableTextMessage } from "./text";
 
 // Bodies of the kits API. The layout document itself is validated by ./layout (schema-versioned).
 
@@ -8,13 +9,20 @@ const kitName = z
   .string({ error: "Name must be text" })
   .trim()
   .min(1, "Name is required")
-  .max(120, "Name must be at most 120 characters");
+  .max(120, "Name must be at most 120 characters")
+  .refine((t) => isStorableText(t), storableTextMessage("Name"));
 const kitScale = z.enum(KIT_SCALES, { error: `Scale must be one of ${KIT_SCALES.join(", ")}` });
-const kitNotes = z.string({ error: "Notes must be text" }).max(4000, "Notes must be at most 4000 characters");
+const kitNotes = z
+  .string({ error: "Notes must be text" })
+  .max(4000, "Notes must be at most 4000 characters")
+  .refine((t) => isStorableText(t, true), storableTextMessage("Notes", true));
 const version = z
   .number({ error: "Version must be a number: the version your edit is based on" })
   .int("Version must be a whole number")
-  .min(1, "Version starts at 1");
+  .min(1, "Version starts at 1")
+  // The column is a PostgreSQL integer and a write stores version + 1, so the largest a write can be based on
+  // is one below the column's maximum.
+  .max(PG_INTEGER_MAX - 1, `Version must be at most ${PG_INTEGER_MAX - 1}`);
 
 export const kitCreateFields = z.object({
   name: kitName,

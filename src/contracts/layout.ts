@@ -6,6 +6,7 @@
  */
 import { z } from "zod";
 import type { KitLayout } from "@/engine/kit-layout";
+import { isStorableText, storableTextMessage } from "./text";
 
 /** Current version of the layout document. */
 export const LAYOUT_SCHEMA_VERSION = 1 as const;
@@ -16,6 +17,15 @@ function bounded(field: string, unit: string, min: number, max: number) {
     .number({ error: `${field} must be a number${unit ? ` (${unit})` : ""}` })
     .min(min, { error: `${field} must be at least ${min}${u}` })
     .max(max, { error: `${field} must be at most ${max}${u}` });
+}
+
+/** A free-text field of the document: stored in jsonb, so no control characters (the field is named). */
+function text(field: string, max: number) {
+  return z
+    .string({ error: `${field} must be text` })
+    .min(1, { error: `${field} must not be empty` })
+    .max(max, { error: `${field} must be at most ${max} characters` })
+    .refine((t) => isStorableText(t), { error: storableTextMessage(field) });
 }
 
 const COORD_Y = (field: string) => bounded(field, "mm", -1000, 1000);
@@ -90,13 +100,13 @@ const motorSchema = z.discriminatedUnion("kind", [
 const materialSchema = z.discriminatedUnion("kind", [
   z.strictObject({
     kind: z.literal("catalogue"),
-    id: z.string().min(1, { error: "strength.material.id must not be empty" }).max(80, { error: "strength.material.id is too long" }),
+    id: text("strength.material.id", 80),
   }),
   z.strictObject({
     kind: z.literal("custom"),
-    name: z.string().min(1, { error: "strength.material.name must not be empty" }).max(120),
+    name: text("strength.material.name", 120),
     yieldMpa: bounded("strength.material.yieldMpa", "MPa", 1, 5000).describe("Tensile yield (across-layer strength for a printed part)"),
-    source: z.string().min(1, { error: "strength.material.source must name where the figure comes from" }).max(500),
+    source: text("strength.material.source", 500),
     printed: z.boolean(),
     derate: bounded("strength.material.derate", "", 0.01, 1).describe("Factor on the yield of a printed part"),
   }),
@@ -133,27 +143,32 @@ const layoutObjectSchema = z.strictObject({
  */
 export const layoutFieldsSchema = layoutObjectSchema;
 
-/** The layout document schema (latest version), with cross-field checks that name the fields involved. */
+/**
+ * The layout document schema (latest version), with cross-field checks that name the fields involved.
+ * A check between fields that each hold a valid value ("a neck wider than the mouth") also names the part
+ * that cannot be built, in the engine's words (GeometryError's part names), as the issue's `params.part`.
+ */
 export const layoutSchema = layoutObjectSchema.superRefine((l, ctx) => {
   const f = l.frontView;
-  const fail = (path: (string | number)[], message: string) => ctx.addIssue({ code: "custom", path, message });
-  if (!(f.lowerOuter.y > f.lowerInner.y)) fail(["frontView", "lowerOuter", "y"], "frontView.lowerOuter.y must be outboard of (greater than) frontView.lowerInner.y");
-  if (!(f.upperOuter.y > f.upperInner.y)) fail(["frontView", "upperOuter", "y"], "frontView.upperOuter.y must be outboard of (greater than) frontView.upperInner.y");
-  if (!(f.upperOuter.z > f.lowerOuter.z)) fail(["frontView", "upperOuter", "z"], "frontView.upperOuter.z must be above frontView.lowerOuter.z");
-  if (!(f.upperInner.z > f.lowerInner.z)) fail(["frontView", "upperInner", "z"], "frontView.upperInner.z must be above frontView.lowerInner.z");
+  const fail = (path: (string | number)[], message: string, part?: string) =>
+    ctx.addIssue({ code: "custom", path, message, ...(part ? { params: { part } } : {}) });
+  if (!(f.lowerOuter.y > f.lowerInner.y)) fail(["frontView", "lowerOuter", "y"], "frontView.lowerOuter.y must be outboard of (greater than) frontView.lowerInner.y", "lower arm");
+  if (!(f.upperOuter.y > f.upperInner.y)) fail(["frontView", "upperOuter", "y"], "frontView.upperOuter.y must be outboard of (greater than) frontView.upperInner.y", "upper arm");
+  if (!(f.upperOuter.z > f.lowerOuter.z)) fail(["frontView", "upperOuter", "z"], "frontView.upperOuter.z must be above frontView.lowerOuter.z", "upright");
+  if (!(f.upperInner.z > f.lowerInner.z)) fail(["frontView", "upperInner", "z"], "frontView.upperInner.z must be above frontView.lowerInner.z", "chassis");
   if (!(f.wheelCentre.y > 0)) fail(["frontView", "wheelCentre", "y"], "frontView.wheelCentre.y must be > 0 (the layout describes the left corner)");
   if (!(f.wheelCentre.z > 0)) fail(["frontView", "wheelCentre", "z"], "frontView.wheelCentre.z must be above the ground (> 0)");
   const d = l.drive;
-  if (!(d.neckDiameterMm < d.cupMouthDiameterMm)) fail(["drive", "neckDiameterMm"], "drive.neckDiameterMm must be smaller than drive.cupMouthDiameterMm");
-  if (d.boreDiameterMm !== undefined && !(d.boreDiameterMm < d.neckDiameterMm)) fail(["drive", "boreDiameterMm"], "drive.boreDiameterMm must be smaller than drive.neckDiameterMm");
+  if (!(d.neckDiameterMm < d.cupMouthDiameterMm)) fail(["drive", "neckDiameterMm"], "drive.neckDiameterMm must be smaller than drive.cupMouthDiameterMm", "shaft neck");
+  if (d.boreDiameterMm !== undefined && !(d.boreDiameterMm < d.neckDiameterMm)) fail(["drive", "boreDiameterMm"], "drive.boreDiameterMm must be smaller than drive.neckDiameterMm", "shaft neck");
   if (d.slottedCup && d.slotLimitDeg === undefined) fail(["drive", "slotLimitDeg"], "drive.slotLimitDeg is required when drive.slottedCup is true");
-  if (!(d.outboardJoint.y > d.inboardJoint.y)) fail(["drive", "outboardJoint", "y"], "drive.outboardJoint.y must be outboard of drive.inboardJoint.y");
+  if (!(d.outboardJoint.y > d.inboardJoint.y)) fail(["drive", "outboardJoint", "y"], "drive.outboardJoint.y must be outboard of drive.inboardJoint.y", "drive shaft");
   const t = l.topView;
   if (!(t.rackEnd.y >= 0)) fail(["topView", "rackEnd", "y"], "topView.rackEnd.y must be ≥ 0 (the left rack end)");
   const dx = t.steeringArmBall.x - t.rackEnd.x;
   const dy = t.steeringArmBall.y - t.rackEnd.y;
   const dz = (t.steeringArmBall.z ?? f.wheelCentre.z) - (t.rackEnd.z ?? t.steeringArmBall.z ?? f.wheelCentre.z);
-  if (!(Math.hypot(dx, dy, dz) > 1)) fail(["topView", "rackEnd"], "topView.rackEnd must be at least 1 mm from topView.steeringArmBall (the tie rod has a length)");
+  if (!(Math.hypot(dx, dy, dz) > 1)) fail(["topView", "rackEnd"], "topView.rackEnd must be at least 1 mm from topView.steeringArmBall (the tie rod has a length)", "tie rod");
 });
 
 /** A parsed, valid layout (latest version). */
@@ -168,6 +183,8 @@ void layoutFitsEngine;
 export interface LayoutIssue {
   readonly path: string;
   readonly message: string;
+  /** Set when each field is valid but they do not fit together: the part that cannot be built. */
+  readonly part?: string;
 }
 
 export type LayoutParseResult =
@@ -242,8 +259,22 @@ export function parseLayout(doc: unknown): LayoutParseResult {
   if (result.success) return { ok: true, layout: result.data, upgradedFrom: version !== null && version < LAYOUT_SCHEMA_VERSION ? version : null };
   return {
     ok: false,
-    issues: result.error.issues.map((i) => ({ path: i.path.map(String).join("."), message: i.message })),
+    issues: result.error.issues.map((i) => {
+      const part = i.code === "custom" ? (i.params as { part?: unknown } | undefined)?.part : undefined;
+      return { path: i.path.map(String).join("."), message: i.message, ...(typeof part === "string" ? { part } : {}) };
+    }),
   };
+}
+
+/**
+ * The part that cannot be built when every issue is a misfit between valid fields (all carry a part), else
+ * null: such a layout is answered as `impossible_geometry` with `part` and `reason`, like the engine's own
+ * refusals, rather than as an invalid field.
+ */
+export function impossibleGeometry(issues: readonly LayoutIssue[]): { part: string; reason: string } | null {
+  const first = issues[0];
+  if (!first || !issues.every((i) => i.part !== undefined)) return null;
+  return { part: first.part!, reason: first.message };
 }
 
 /** Layout issues as request-body field issues, their paths under `prefix` (at most 50). */

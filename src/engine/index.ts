@@ -13,3 +13,16 @@ export type { Vec2 } from "./math/vec2";
 export { cornerPoser, cornerPoseAt, wheelAxesMeet, type CornerPose, type CornerPoser, type WheelPose } from "./corner-pose";
 export { cupArticulationLimit, neckClearanceMm } from "./drive/neck-contact";
 export { MATERIALS } from "./strength/materials";
+export {
+  neckTradeoff,
+  neckTradeoffRangeMm,
+  NECK_TRADEOFF_GRID,
+  NECK_TRADEOFF_RANGE,
+  NECK_TRADEOFF_SAMPLES,
+  type NeckTradeoff,
+  type NeckTradeoffGap,
+  type NeckTradeoffOptions,
+  type NeckTradeoffPoint,
+  type NeckTradeoffSample,
+} from "./neck-tradeoff";
+export { ackermannIdealOuterDeg } from "./steering/ackermann";

@@ -10,7 +10,7 @@ const envSchema = z.object({
   DB_POOL_MAX: z.coerce.number().int().min(1).max(100).default(10),
   BETTER_AUTH_SECRET: z.string().min(16).optional(),
   BETTER_AUTH_URL: z.string().url().default("http://127.0.0.1:3000"),
-  // Comma-separated extra origins allowed to POST to the auth routes.
+  // Comma-separated extra origins allowed to send state-changing requests (auth and app routes).
   KB_TRUSTED_ORIGINS: z.string().default(""),
   KB_AUTH_RATE_LIMIT: z.enum(["on", "off"]).optional(),
   // Who the auth rate limit counts a request against (src/server/http/client-address.ts). By default the
@@ -51,4 +51,18 @@ export function authSecret(): string {
     throw new Error("BETTER_AUTH_SECRET must be set (at least 16 characters) when NODE_ENV=production");
   }
   return DEV_SECRET;
+}
+
+/**
+ * Origins allowed to send state-changing requests, to the auth routes (better-auth's trustedOrigins) and to
+ * every app write route (src/server/http/route.ts): the app's own origin, its localhost ↔ 127.0.0.1 twin
+ * (the same server is reached by either name), and KB_TRUSTED_ORIGINS.
+ */
+export function trustedOrigins(): string[] {
+  const base = new URL(env.BETTER_AUTH_URL);
+  const origins = new Set([base.origin]);
+  if (base.hostname === "127.0.0.1") origins.add(base.origin.replace("127.0.0.1", "localhost"));
+  if (base.hostname === "localhost") origins.add(base.origin.replace("localhost", "127.0.0.1"));
+  for (const o of env.KB_TRUSTED_ORIGINS.split(",").map((s) => s.trim()).filter(Boolean)) origins.add(o);
+  return [...origins];
 }

@@ -73,7 +73,8 @@ describe("layout contract", () => {
 
   it("cross-field checks name both fields", () => {
     const neck = { ...TARNWICK_10_BASE, drive: { ...TARNWICK_10_BASE.drive, neckDiameterMm: 8 } };
-    expect(issuesOf(neck)).toContainEqual({ path: "drive.neckDiameterMm", message: "drive.neckDiameterMm must be smaller than drive.cupMouthDiameterMm" });
+    // A misfit of valid values also names the part that cannot be built (the API answers impossible_geometry).
+    expect(issuesOf(neck)).toContainEqual({ path: "drive.neckDiameterMm", message: "drive.neckDiameterMm must be smaller than drive.cupMouthDiameterMm", part: "shaft neck" });
     const slot = { ...TARNWICK_10_BASE, drive: { ...TARNWICK_10_BASE.drive, slottedCup: true } };
     expect(issuesOf(slot).map((i) => i.path)).toContain("drive.slotLimitDeg");
     const arms = { ...TARNWICK_10_BASE, frontView: { ...TARNWICK_10_BASE.frontView, upperOuter: { y: 104.9, z: 20 } } };

@@ -2,51 +2,14 @@
 // in each state a person meets it in (empty, filled, with validation errors). Results and screenshots
 // land in .data/e2e-axe/ and .data/e2e-shots/.
 import { randomUUID } from "node:crypto";
-import type { Page } from "playwright-core";
 import { beforeAll, describe, expect, it } from "vitest";
 import { blockingViolations, expectAccessible } from "./helpers/a11y";
-import { baseUrl, setUpBrowser } from "./helpers/browser";
+import { apiAs, pageAs as openAs, signUpByApi, type Account } from "./helpers/accounts";
+import { setUpBrowser } from "./helpers/browser";
 
 const browser = setUpBrowser();
 
-type Account = { name: string; email: string; cookies: { name: string; value: string }[] };
-
-// Test set-up goes through the public API; only the pages under check are driven in the browser.
-async function signUpByApi(name: string): Promise<Account> {
-  const email = `${name.split(" ")[0].toLowerCase()}-${randomUUID().slice(0, 8)}@test.example`;
-  const res = await fetch(`${baseUrl}/api/auth/sign-up/email`, {
-    method: "POST",
-    headers: { "content-type": "application/json", origin: baseUrl },
-    body: JSON.stringify({ name, email, password: "steer-lock-42" }),
-  });
-  if (res.status !== 200) throw new Error(`sign-up of ${email} failed: ${res.status} ${await res.text()}`);
-  const cookies = res.headers.getSetCookie().map((c) => {
-    const [pair] = c.split(";");
-    const at = pair.indexOf("=");
-    return { name: pair.slice(0, at), value: pair.slice(at + 1) };
-  });
-  return { name, email, cookies };
-}
-
-async function apiAs<T>(account: Account, path: string, init: { method?: string; body?: unknown } = {}): Promise<T> {
-  const res = await fetch(`${baseUrl}${path}`, {
-    method: init.method ?? "GET",
-    headers: {
-      cookie: account.cookies.map((c) => `${c.name}=${c.value}`).join("; "),
-      origin: baseUrl,
-      ...(init.body === undefined ? {} : { "content-type": "application/json" }),
-    },
-    body: init.body === undefined ? undefined : JSON.stringify(init.body),
-  });
-  if (!res.ok) throw new Error(`${init.method ?? "GET"} ${path} answered ${res.status}: ${await res.text()}`);
-  return (await res.json()) as T;
-}
-
-async function pageAs(account: Account): Promise<Page> {
-  const page = await browser.newPage();
-  await page.context().addCookies(account.cookies.map((c) => ({ ...c, url: baseUrl })));
-  return page;
-}
+const pageAs = (account: Account) => openAs(browser, account);
 
 describe("the accessibility check itself", () => {
   it("fails on grey text that does not reach 4.5:1 and names the rule, the impact and the element", async () => {
@@ -178,12 +141,13 @@ describe("signed-in pages", () => {
     const id = await ensureKit();
     const page = await pageAs(owner);
     await page.goto(`/workspaces/${workspaceId}/kits/${id}`);
+    await page.getByTestId("tab-sheet").click();
     await page.getByRole("region", { name: "Steer lock" }).getByText("Limited by").waitFor();
     await page.getByRole("table", { name: "Neck diameter what-if" }).waitFor();
     await page.locator("figure .recharts-line").nth(5).waitFor();
     // Each chart's svg is focusable (recharts' keyboard layer), so it carries its caption as its name.
     for (const chart of ["Camber and roll centre over travel", "Steer lock over travel", "Joint angle over rack travel (static)"]) {
-      await page.getByRole("application", { name: chart }).waitFor();
+      await page.getByTestId("analysis-sheet").getByRole("application", { name: chart }).waitFor();
     }
     await expectAccessible(page, { name: "kit-sheet" });
   });

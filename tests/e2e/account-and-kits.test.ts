@@ -66,6 +66,9 @@ describe("a kit's analysis sheet", () => {
     await page.getByRole("button", { name: "Create kit" }).click();
     await page.getByRole("link", { name: "Heron corner" }).click();
     await page.waitForURL(/\/kits\/[0-9a-f-]{36}$/);
+    // A new kit opens in the editor on the baseline corner; the full sheet is one of its tabs.
+    await page.getByTestId("steer-lock-worst").waitFor();
+    await page.getByTestId("tab-sheet").click();
 
     const lock = page.getByRole("region", { name: "Steer lock" });
     await lock.getByText("Limited by").waitFor();

@@ -1,9 +1,12 @@
+import { act, renderHook, waitFor } from "@testing-library/react";
 import { describe, expect, it } from "vitest";
 import { TARNWICK_10_BASE } from "@/contracts/demo-layouts";
-import { analyzeLayout } from "@/engine";
+import { analyzeLayout, neckTradeoff, NECK_TRADEOFF_GRID } from "@/engine";
 import { setAt } from "@/editor/document/layout-paths";
 import { createAnalysisClient, type AnalysisPort } from "@/editor/readouts/analysis-client";
 import { ANALYSIS_GRIDS, answerAnalysisRequest, type AnalysisReply, type AnalysisRequest } from "@/editor/readouts/analysis-protocol";
+import { useLiveAnalysis } from "@/editor/readouts/use-live-analysis";
+import { makeStore } from "./editor-fixtures";
 
 describe("the worker's answer", () => {
   it("is the engine's own analysis at the requested grid", () => {
@@ -14,6 +17,19 @@ describe("the worker's answer", () => {
     expect(reply.analysis).toEqual(analyzeLayout(TARNWICK_10_BASE, ANALYSIS_GRIDS.full));
     const coarse = answerAnalysisRequest({ type: "analyze", id: 8, quality: "coarse", layout: TARNWICK_10_BASE });
     expect(coarse.ok && coarse.analysis.grid).toEqual(ANALYSIS_GRIDS.coarse);
+  });
+
+  it("adds the neck trade-off to a full analysis, and only to a full one", () => {
+    const full = answerAnalysisRequest({ type: "analyze", id: 9, quality: "full", layout: TARNWICK_10_BASE });
+    if (!full.ok) throw new Error("the demo layout analyses");
+    expect(full.tradeoff).toEqual(neckTradeoff(TARNWICK_10_BASE));
+    // Its current-neck sample is the figures the readouts show at the same grid: 5 mm, the worst lock, the safety factor.
+    const at = full.tradeoff!.samples[full.tradeoff!.currentIndex];
+    const same = analyzeLayout(TARNWICK_10_BASE, NECK_TRADEOFF_GRID);
+    expect(at).toMatchObject({ ok: true, neckDiameterMm: 5, steerLockDeg: same.steerLock.worst.innerDeg, safetyFactor: same.strength.safetyFactor });
+    expect(full.tradeoff!.samples.length).toBeGreaterThanOrEqual(15);
+    const coarse = answerAnalysisRequest({ type: "analyze", id: 10, quality: "coarse", layout: TARNWICK_10_BASE });
+    expect(coarse.ok && coarse.tradeoff).toBeNull();
   });
 
   it("names the field for a value out of its range", () => {
@@ -77,5 +93,28 @@ describe("the client's protocol", () => {
     const last = replies[1]!.reply;
     expect(last.ok && last.analysis.strength.safetyFactor).toBeCloseTo(analyzeLayout(setAt(TARNWICK_10_BASE, "drive.neckDiameterMm", 4.1), ANALYSIS_GRIDS.coarse).strength.safetyFactor, 10);
     w.close();
+  });
+});
+
+describe("the live analysis hook", () => {
+  it("fills the store's trade-off from the full analysis and keeps it through coarse drafts", async () => {
+    // jsdom has no Worker: the port answers on this thread, through the same protocol.
+    const store = makeStore({ analysis: analyzeLayout(TARNWICK_10_BASE, ANALYSIS_GRIDS.full) });
+    expect(store.getState().live.tradeoff).toBeNull();
+    const hook = renderHook(() => useLiveAnalysis(store));
+    await waitFor(() => expect(store.getState().live.tradeoff).not.toBeNull());
+    const first = store.getState().live.tradeoff!;
+    expect(first).toEqual(neckTradeoff(TARNWICK_10_BASE));
+
+    const seq = store.getState().live.seq;
+    act(() => store.getState().setDraft(setAt(TARNWICK_10_BASE, "drive.neckDiameterMm", 4.5)));
+    await waitFor(() => expect(store.getState().live.seq).toBeGreaterThan(seq));
+    expect(store.getState().live.quality).toBe("coarse");
+    expect(store.getState().live.tradeoff).toBe(first);
+
+    act(() => store.getState().commit(setAt(TARNWICK_10_BASE, "drive.neckDiameterMm", 4.5)));
+    await waitFor(() => expect(store.getState().live.tradeoff?.currentNeckMm).toBe(4.5));
+    expect(store.getState().live.quality).toBe("full");
+    hook.unmount();
   });
 });

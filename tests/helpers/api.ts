@@ -6,15 +6,20 @@ export const BASE = process.env.BETTER_AUTH_URL ?? "http://127.0.0.1:3000";
 
 type Handler<P> = (req: Request, ctx: { params: Promise<P> }) => Promise<Response>;
 
-export type CallOptions = { cookie?: string; body?: unknown; rawBody?: string; headers?: Record<string, string> };
+/** `omitOrigin` sends a write without the Origin header a browser would add (every write gets the app's by default). */
+export type CallOptions = { cookie?: string; body?: unknown; rawBody?: string; headers?: Record<string, string>; omitOrigin?: boolean };
 
 export async function call<P>(handler: Handler<P>, method: string, path: string, params: P, opts: CallOptions = {}) {
   const headers: Record<string, string> = { ...opts.headers };
+  // A browser sends Origin on every request but GET and HEAD; the write routes refuse a cookie without it.
+  if (method !== "GET" && method !== "HEAD" && !opts.omitOrigin && !Object.keys(headers).some((h) => h.toLowerCase() === "origin")) {
+    headers.origin = new URL(BASE).origin;
+  }
   if (opts.cookie) headers.cookie = opts.cookie;
   let body: string | undefined;
   if (opts.rawBody !== undefined) body = opts.rawBody;
   else if (opts.body !== undefined) body = JSON.stringify(opts.body);
-  if (body !== undefined && !headers["content-type"]) headers["content-type"] = "application/json";
+  if (body !== undefined && !Object.keys(headers).some((h) => h.toLowerCase() === "content-type")) headers["content-type"] = "application/json";
   const res = await handler(new Request(`${BASE}${path}`, { method, headers, body }), { params: Promise.resolve(params) });
   const text = await res.text();
   let json: unknown = null;

@@ -46,7 +46,9 @@ export function PropertyPanel() {
 
   // The document changed elsewhere (a drag, undo, another unit): show it.
   useEffect(() => {
+    // The layout this form just wrote is already what it shows; any other (drag, undo, reload) refreshes it.
     if (layout !== lastWritten.current) form.reset(layoutToForm(layout, unit));
+    lastWritten.current = null;
   }, [layout, unit, form]);
 
   const write = () => {

@@ -2,7 +2,7 @@
 // answer is computed by the same engine and contract as the API (parse, upgrade, analyse), so the
 // browser's figures are the server's.
 import { layoutFieldsSchema, layoutSchema, parseLayout } from "@/contracts/layout";
-import { analyzeLayout, GeometryError, type AnalysisResult } from "@/engine";
+import { analyzeLayout, GeometryError, neckTradeoff, type AnalysisResult, type NeckTradeoff } from "@/engine";
 import type { LayoutFault } from "../store/editor-store";
 import { faultFromGeometry, faultFromIssues } from "./layout-faults";
 
@@ -22,7 +22,16 @@ export interface AnalysisRequest {
 }
 
 export type AnalysisReply =
-  | { readonly type: "result"; readonly id: number; readonly quality: AnalysisQuality; readonly ok: true; readonly analysis: AnalysisResult; readonly ms: number }
+  | {
+      readonly type: "result";
+      readonly id: number;
+      readonly quality: AnalysisQuality;
+      readonly ok: true;
+      readonly analysis: AnalysisResult;
+      /** The neck trade-off, computed after a full analysis only (null on coarse, to keep up with the pointer). */
+      readonly tradeoff: NeckTradeoff | null;
+      readonly ms: number;
+    }
   | { readonly type: "result"; readonly id: number; readonly quality: AnalysisQuality; readonly ok: false; readonly fault: LayoutFault; readonly ms: number };
 
 const issuesOf = (error: { issues: readonly { path: readonly PropertyKey[]; message: string }[] }) =>
@@ -42,7 +51,9 @@ export function answerAnalysisRequest(req: AnalysisRequest): AnalysisReply {
     return done({ ok: false as const, fault: faultFromIssues(cross.success ? parsed.issues : issuesOf(cross.error), "impossible") });
   }
   try {
-    return done({ ok: true as const, analysis: analyzeLayout(parsed.layout, ANALYSIS_GRIDS[req.quality]) });
+    const analysis = analyzeLayout(parsed.layout, ANALYSIS_GRIDS[req.quality]);
+    const tradeoff = req.quality === "full" ? neckTradeoff(parsed.layout) : null;
+    return done({ ok: true as const, analysis, tradeoff });
   } catch (error) {
     if (error instanceof GeometryError) return done({ ok: false as const, fault: faultFromGeometry(error.part, error.reason) });
     throw error;

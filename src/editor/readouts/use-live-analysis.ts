@@ -10,12 +10,16 @@ export function useLiveAnalysis(store: EditorStore): void {
     const { port, stop } = startAnalysisPort();
     const client = createAnalysisClient(port, (reply, isLatest) => {
       const set = store.getState().setLive;
-      if (reply.ok) set({ analysis: reply.analysis, quality: reply.quality, stale: !isLatest, fault: null });
+      if (reply.ok) {
+        // A coarse reply carries no trade-off: the last full one stays until the next full analysis.
+        set({ analysis: reply.analysis, quality: reply.quality, stale: !isLatest, fault: null, ...(reply.tradeoff ? { tradeoff: reply.tradeoff } : {}) });
+      }
       else if (isLatest) set({ stale: true, fault: reply.fault });
     });
-    // The server's figures are of the saved layout; anything else on screen needs its own.
+    // The server's figures are of the saved layout; anything else on screen needs its own (and the
+    // trade-off, which only the worker computes unless the page brought one).
     const first = store.getState();
-    if (first.live.analysis === null || first.live.fault !== null) client.request(first.layout, "full");
+    if (first.live.analysis === null || first.live.fault !== null || first.live.tradeoff === null) client.request(first.layout, "full");
     const unsubscribe = store.subscribe((s, prev) => {
       if (s.draft && s.draft !== prev.draft) client.request(s.draft, "coarse");
       else if (!s.draft && (s.layout !== prev.layout || prev.draft)) client.request(s.layout, "full");

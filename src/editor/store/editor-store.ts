@@ -7,7 +7,7 @@
 import { temporal } from "zundo";
 import { createStore, type StoreApi } from "zustand/vanilla";
 import type { Layout } from "@/contracts/layout";
-import type { AnalysisResult } from "@/engine";
+import type { AnalysisResult, NeckTradeoff } from "@/engine";
 import type { PartId } from "../document/handles";
 import { DEFAULT_GRID_STEP_MM } from "../tools/snapping";
 import type { LengthUnit } from "../units/length-unit";
@@ -42,6 +42,11 @@ export interface LiveAnalysis {
   /** True when `analysis` is not of the layout on screen (a fault, or a newer edit still computing). */
   readonly stale: boolean;
   readonly fault: LayoutFault | null;
+  /**
+   * Steer lock and safety factor over neck diameter, from the last full analysis (null until one is known).
+   * Coarse analyses while dragging leave it as it was: it is of the layout before the drag until release.
+   */
+  readonly tradeoff: NeckTradeoff | null;
   /** Bumped for every result applied: readouts and the bench watch it. */
   readonly seq: number;
 }
@@ -111,6 +116,8 @@ export interface EditorInit {
   readonly lengthUnit: LengthUnit;
   /** The analysis the server made with the page, so figures show before the worker starts. */
   readonly analysis: AnalysisResult | null;
+  /** The neck trade-off of the same layout, when the page has one (else the worker computes it). */
+  readonly tradeoff?: NeckTradeoff | null;
   readonly fault?: LayoutFault | null;
   readonly gridStepMm?: number;
 }
@@ -134,7 +141,7 @@ export function createEditorStore(init: EditorInit): EditorStore {
           lengthUnit: init.lengthUnit,
           show: { kingpinAxis: true, instantCentre: true, rollCentre: true, ackermann: true, dimensions: true },
         },
-        live: { analysis: init.analysis, quality: "full", stale: init.analysis === null, fault: init.fault ?? null, seq: 0 },
+        live: { analysis: init.analysis, quality: "full", stale: init.analysis === null, fault: init.fault ?? null, tradeoff: init.tradeoff ?? null, seq: 0 },
         save: { status: "idle" },
 
         commit(next, options) {
@@ -199,6 +206,12 @@ export const selectShownLayout = (s: EditorState): Layout => s.draft ?? s.layout
 
 /** True when the document differs from what was last loaded or saved. */
 export const selectDirty = (s: EditorState): boolean => JSON.stringify(s.layout) !== s.savedJson;
+
+/** True when the document is the thing to fault: the server would refuse it, so Save waits for a fix. */
+export const selectFaulty = (s: EditorState): boolean => s.live.fault !== null && s.draft === null;
+
+/** Whether Save (button or shortcut) has anything it may do now. */
+export const selectCanSave = (s: EditorState): boolean => !s.readOnly && selectDirty(s) && !selectFaulty(s);
 
 export function undo(store: EditorStore): void {
   if (store.getState().draft) return;

@@ -1,6 +1,6 @@
 // One analysis request as plain data in and out, so it can run in a worker thread or inline.
 import type { AnalyzeGrid } from "@/contracts/analyze";
-import { layoutFieldIssues, parseLayout } from "@/contracts/layout";
+import { impossibleGeometry, layoutFieldIssues, parseLayout } from "@/contracts/layout";
 import { analyzeLayout, GeometryError } from "@/engine";
 
 export type AnalysisJob = { readonly layout: unknown; readonly grid?: AnalyzeGrid; readonly envelope?: Record<string, unknown> };
@@ -14,6 +14,8 @@ export function runAnalysisJob(job: AnalysisJob): AnalysisOutcome {
   const parsed = parseLayout(job.layout);
   if (!parsed.ok) {
     const fields = layoutFieldIssues(parsed.issues);
+    const misfit = impossibleGeometry(parsed.issues);
+    if (misfit) return { ok: false, status: 422, code: "impossible_geometry", message: `${misfit.part}: ${misfit.reason}`, fields, ...misfit };
     return { ok: false, status: 422, code: "invalid", message: `Invalid layout: ${fields[0]!.path}: ${fields[0]!.message}`, fields };
   }
   try {

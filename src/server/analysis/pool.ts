@@ -115,8 +115,13 @@ function pool(): AnalysisPool | null {
  * the event loop — and answers its JSON, or throws the job's 422 (or the full queue's 429) as an HttpError.
  */
 export async function analysisResponse(job: AnalysisJob): Promise<Response> {
-  const workers = pool();
-  const outcome = workers ? await workers.run(job) : runAnalysisJob(job);
+  const outcome = await runAnalysis(job);
   if (outcome.ok) return new Response(outcome.json, { headers: { "content-type": "application/json" } });
   throw new HttpError(outcome.status, outcome.code, outcome.message, outcome.fields, outcome.part ? { part: outcome.part, reason: outcome.reason } : undefined);
+}
+
+/** One job's outcome through the same workers (pages render their figures with it). */
+export async function runAnalysis(job: AnalysisJob): Promise<AnalysisOutcome> {
+  const workers = pool();
+  return workers ? workers.run(job) : runAnalysisJob(job);
 }

@@ -4,20 +4,10 @@ import { drizzleAdapter } from "better-auth/adapters/drizzle";
 import { organization } from "better-auth/plugins/organization";
 import { db } from "../db/client";
 import * as schema from "../db/schema";
-import { authSecret, env } from "../env";
+import { authSecret, env, trustedOrigins } from "../env";
 import { createPersonalWorkspace } from "../data/workspaces";
 import { CLIENT_ADDRESS_HEADER } from "../http/client-address";
 import { ac, roles } from "./access";
-
-function trustedOrigins(): string[] {
-  const base = new URL(env.BETTER_AUTH_URL);
-  const origins = new Set([base.origin]);
-  // The same server is reached as localhost or 127.0.0.1 depending on who types the address.
-  if (base.hostname === "127.0.0.1") origins.add(base.origin.replace("127.0.0.1", "localhost"));
-  if (base.hostname === "localhost") origins.add(base.origin.replace("localhost", "127.0.0.1"));
-  for (const o of env.KB_TRUSTED_ORIGINS.split(",").map((s) => s.trim()).filter(Boolean)) origins.add(o);
-  return [...origins];
-}
 
 export const auth = betterAuth({
   appName: "Knucklebench",

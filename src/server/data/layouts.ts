@@ -1,14 +1,19 @@
 import "server-only";
 import { z } from "zod";
 import { DEMO_LAYOUTS } from "@/contracts/demo-layouts";
-import { layoutFieldIssues, parseLayout, upgradeLayout, type Layout } from "@/contracts/layout";
+import { impossibleGeometry, layoutFieldIssues, parseLayout, upgradeLayout, type Layout } from "@/contracts/layout";
 import { HttpError } from "../http/errors";
 
-/** Validates a layout sent by a client (any known schema version; upgraded to the latest). 422 names each field. */
+/**
+ * Validates a layout sent by a client (any known schema version; upgraded to the latest). 422 names each
+ * field: `invalid`, or `impossible_geometry` with `part` and `reason` when valid fields do not fit together.
+ */
 export function requireValidLayout(doc: unknown, prefix = "layout"): Layout {
   const parsed = parseLayout(doc);
   if (parsed.ok) return parsed.layout;
   const fields = layoutFieldIssues(parsed.issues, prefix);
+  const misfit = impossibleGeometry(parsed.issues);
+  if (misfit) throw new HttpError(422, "impossible_geometry", `${misfit.part}: ${misfit.reason}`, fields, misfit);
   throw new HttpError(422, "invalid", `Invalid layout: ${fields[0]!.path}: ${fields[0]!.message}`, fields);
 }
 

@@ -21,7 +21,7 @@ export async function pageWorkspace<R extends Resource>(workspaceId: string, res
     return await requireWorkspaceAccess(await headers(), workspaceId, resource, action);
   } catch (error) {
     if (error instanceof HttpError && error.status === 401) redirect(`/sign-in?next=${encodeURIComponent(nextPath)}`);
-    if (error instanceof HttpError && error.status === 403) notFound();
+    if (error instanceof HttpError && (error.status === 403 || error.status === 404)) notFound();
     throw error;
   }
 }

@@ -1,8 +1,8 @@
 import "server-only";
 import { randomUUID } from "node:crypto";
 import { and, asc, eq, sql } from "drizzle-orm";
-import type { WorkspaceRole } from "@/contracts/roles";
-import type { MemberRow, WorkspaceSummary } from "@/contracts/workspaces";
+import { roleCan, type WorkspaceRole } from "@/contracts/roles";
+import { memberIdParam, type MemberRow, type WorkspaceSummary } from "@/contracts/workspaces";
 import { db } from "../db/client";
 import { members, sessions, users, workspaces } from "../db/schema";
 import { HttpError } from "../http/errors";
@@ -57,8 +57,10 @@ export async function listMembers(workspaceId: string): Promise<MemberRow[]> {
   return rows.map((r) => ({ ...r, createdAt: r.createdAt.toISOString() }));
 }
 
-async function ownerCount(workspaceId: string): Promise<number> {
-  const [row] = await db
+type Tx = Parameters<Parameters<typeof db.transaction>[0]>[0];
+
+async function ownerCount(tx: Tx, workspaceId: string): Promise<number> {
+  const [row] = await tx
     .select({ n: sql<number>`count(*)::int` })
     .from(members)
     .where(and(eq(members.organizationId, workspaceId), eq(members.role, "owner")));
@@ -90,33 +92,57 @@ export async function addMemberByEmail(workspaceId: string, actorRole: string, e
   return rows.find((r) => r.id === inserted[0]!.id)!;
 }
 
-async function memberOf(workspaceId: string, memberId: string) {
-  const [row] = await db
+async function memberOf(tx: Tx, workspaceId: string, memberId: string) {
+  const missing = () => new HttpError(404, "not_found", "That member was not found in this workspace.");
+  if (!memberIdParam.safeParse(memberId).success) throw missing(); // a malformed id is a member that is not there
+  const [row] = await tx
     .select({ id: members.id, role: members.role, userId: members.userId })
     .from(members)
     .where(and(eq(members.organizationId, workspaceId), eq(members.id, memberId)))
     .limit(1);
-  if (!row) throw new HttpError(404, "not_found", "That member was not found in this workspace.");
+  if (!row) throw missing();
   return row;
 }
 
-export async function changeMemberRole(workspaceId: string, actorRole: string, memberId: string, role: WorkspaceRole): Promise<void> {
-  const target = await memberOf(workspaceId, memberId);
-  assertMayGrant(actorRole, role);
-  if (target.role === "owner" && actorRole !== "owner") throw new HttpError(403, "forbidden", "Only an owner may change an owner's role.");
-  if (target.role === "owner" && role !== "owner" && (await ownerCount(workspaceId)) <= 1) {
-    throw new HttpError(409, "last_owner", "A workspace needs at least one owner; name another owner first.");
-  }
-  await db.update(members).set({ role }).where(eq(members.id, memberId));
+const lastOwner = () => new HttpError(409, "last_owner", "A workspace needs at least one owner; name another owner first.");
+
+/**
+ * Runs a change to the workspace's members with the workspace row locked (SELECT … FOR UPDATE), so two
+ * changes to one workspace run one after the other and each sees the other's result: two owners demoting or
+ * removing each other at the same moment cannot both pass the last-owner check. The actor's role is read
+ * again under the lock (the guard's reading may be stale by then: a concurrent change may have lowered it).
+ */
+async function withMembersLocked<T>(workspaceId: string, actorUserId: string, action: "update" | "delete", change: (tx: Tx, actorRole: string) => Promise<T>): Promise<T> {
+  return db.transaction(async (tx) => {
+    await tx.select({ id: workspaces.id }).from(workspaces).where(eq(workspaces.id, workspaceId)).for("update");
+    const [me] = await tx
+      .select({ role: members.role })
+      .from(members)
+      .where(and(eq(members.organizationId, workspaceId), eq(members.userId, actorUserId)))
+      .limit(1);
+    if (!me) throw new HttpError(403, "not_a_member", "You are not a member of this workspace.");
+    if (!roleCan(me.role, "member", action)) throw new HttpError(403, "forbidden", `A ${me.role} of this workspace may not ${action} members.`);
+    return change(tx, me.role);
+  });
 }
 
-export async function removeMember(workspaceId: string, actorRole: string, memberId: string): Promise<void> {
-  const target = await memberOf(workspaceId, memberId);
-  if (target.role === "owner" && actorRole !== "owner") throw new HttpError(403, "forbidden", "Only an owner may remove an owner.");
-  if (target.role === "owner" && (await ownerCount(workspaceId)) <= 1) {
-    throw new HttpError(409, "last_owner", "A workspace needs at least one owner; name another owner first.");
-  }
-  await db.delete(members).where(eq(members.id, memberId));
+export async function changeMemberRole(workspaceId: string, actorUserId: string, memberId: string, role: WorkspaceRole): Promise<void> {
+  await withMembersLocked(workspaceId, actorUserId, "update", async (tx, actorRole) => {
+    const target = await memberOf(tx, workspaceId, memberId);
+    assertMayGrant(actorRole, role);
+    if (target.role === "owner" && actorRole !== "owner") throw new HttpError(403, "forbidden", "Only an owner may change an owner's role.");
+    if (target.role === "owner" && role !== "owner" && (await ownerCount(tx, workspaceId)) <= 1) throw lastOwner();
+    await tx.update(members).set({ role }).where(eq(members.id, memberId));
+  });
+}
+
+export async function removeMember(workspaceId: string, actorUserId: string, memberId: string): Promise<void> {
+  await withMembersLocked(workspaceId, actorUserId, "delete", async (tx, actorRole) => {
+    const target = await memberOf(tx, workspaceId, memberId);
+    if (target.role === "owner" && actorRole !== "owner") throw new HttpError(403, "forbidden", "Only an owner may remove an owner.");
+    if (target.role === "owner" && (await ownerCount(tx, workspaceId)) <= 1) throw lastOwner();
+    await tx.delete(members).where(eq(members.id, memberId));
+  });
 }
 
 export async function setActiveWorkspace(sessionId: string, workspaceId: string): Promise<void> {

@@ -1,28 +1,60 @@
 import "server-only";
+import { randomUUID } from "node:crypto";
 import type { Action, Resource } from "@/contracts/roles";
 import { requireSession, requireWorkspaceAccess, type Signed, type WorkspaceAccess } from "../data/guard";
+import { trustedOrigins } from "../env";
+import { isJsonMediaType, unsupportedMediaType } from "./body";
 import { errorResponse, HttpError } from "./errors";
+import { describeError } from "./error-log";
 
 type RouteContext<P> = { params: Promise<P> };
 
-/** Maps thrown errors to JSON; anything unexpected is logged and answered without internals. */
-export function toErrorResponse(error: unknown): Response {
+/** Maps thrown errors to JSON; anything unexpected is logged (without request data) and answered without internals. */
+export function toErrorResponse(error: unknown, req?: Request): Response {
   if (error instanceof HttpError) return errorResponse(error);
   if (error && typeof error === "object" && (error as { name?: string }).name === "GeometryError") {
     const e = error as { message: string; part?: string; reason?: string };
     return errorResponse(new HttpError(422, "impossible_geometry", e.message, undefined, { part: e.part, reason: e.reason }));
   }
-  console.error("Unhandled error in route handler:", error);
-  return errorResponse(new HttpError(500, "internal", "Something went wrong on our side; nothing was changed."));
+  // The line names the route and the error, never the query string, body or query parameters (names, notes,
+  // e-mail addresses); the id in the answer finds the line.
+  const errorId = randomUUID();
+  const route = req ? `${req.method} ${new URL(req.url).pathname.slice(0, 200)}` : "(route)";
+  console.error(`Unhandled error ${errorId} in ${route}: ${describeError(error)}`);
+  return errorResponse(new HttpError(500, "internal", "Something went wrong on our side; nothing was changed.", undefined, { errorId }));
 }
 
-/** The one place a handler's errors become JSON responses. */
+const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);
+const TRUSTED_ORIGINS = new Set(trustedOrigins().map((o) => URL.canParse(o) ? new URL(o).origin : o));
+
+/**
+ * Refuses a state-changing request another site could have made with the user's cookie: 403 `cross_origin`
+ * unless its Origin is one of the trusted origins (the list the auth routes use), 415 unless a body it
+ * carries is declared `application/json` (what an HTML form or a no-cors fetch can send without a CORS
+ * preflight is not). Browsers send Origin on every non-GET request (Fetch standard), so a write with a
+ * cookie and no Origin is refused too, as better-auth refuses it; a write with neither cookie nor Origin
+ * (a script) carries no ambient authority to forge and goes on to the session check, which answers 401.
+ */
+function checkWriteRequest(req: Request): void {
+  if (SAFE_METHODS.has(req.method)) return;
+  const origin = req.headers.get("origin");
+  if (origin === null ? req.headers.has("cookie") : !TRUSTED_ORIGINS.has(origin)) {
+    throw new HttpError(403, "cross_origin", origin === null
+      ? "A request that changes data must carry an Origin header naming this app."
+      : "Requests that change data are accepted only from this app's own pages.");
+  }
+  const type = req.headers.get("content-type");
+  if (type !== null && !isJsonMediaType(type)) throw unsupportedMediaType();
+}
+
+/** The one place a handler's errors become JSON responses, after the write checks every route shares. */
 function handled<P>(run: (req: Request, params: P) => Promise<Response>) {
   return async (req: Request, ctx: RouteContext<P>): Promise<Response> => {
     try {
+      checkWriteRequest(req);
       return await run(req, await ctx.params);
     } catch (error) {
-      return toErrorResponse(error);
+      return toErrorResponse(error, req);
     }
   };
 }

@@ -31,7 +31,7 @@ const args = [
 
 export interface BrowserHarness {
   /** A page in a new, isolated context whose relative URLs resolve against the app. */
-  newPage(): Promise<Page>;
+  newPage(viewport?: { width: number; height: number }): Promise<Page>;
 }
 
 export function setUpBrowser(): BrowserHarness {
@@ -59,9 +59,9 @@ export function setUpBrowser(): BrowserHarness {
   });
 
   return {
-    async newPage() {
+    async newPage(viewport) {
       browser ??= await chromium.launch({ executablePath, headless: true, args });
-      const context = await browser.newContext({ baseURL: baseUrl });
+      const context = await browser.newContext({ baseURL: baseUrl, ...(viewport ? { viewport } : {}) });
       contexts.push(context);
       return context.newPage();
     },

@@ -1,16 +1,7 @@
 "use client";
-import { useQuery } from "@tanstack/react-query";
-import Link from "next/link";
-import { Spinner } from "@/components/ui/button";
-import { ErrorNotice } from "@/components/ui/notice";
 import type { AnalysisResult } from "@/engine";
-import { api } from "@/lib/api-client";
 import { fmt, limitLabel, signed } from "@/lib/format";
-import { queryKeys } from "@/lib/query-keys";
-import type { KitDetail } from "@/contracts/kits";
 import { JointAngleChart, SteerLockChart, TravelChart } from "./kit-charts";
-
-type Props = { workspaceId: string; kitId: string };
 
 function Figure({ label, value, hint, tone }: { label: string; value: string; hint?: string; tone?: "good" | "bad" }) {
   const colour = tone === "bad" ? "text-red-700" : tone === "good" ? "text-emerald-700" : "text-ink";
@@ -27,42 +18,17 @@ function Section({ title, children }: { title: string; children: React.ReactNode
   return (
     <section aria-label={title} className="flex flex-col gap-2">
       <h2 className="text-sm font-semibold uppercase tracking-wide text-ink-muted">{title}</h2>
-      <dl className="grid grid-cols-2 gap-2 sm:grid-cols-3">{children}</dl>
+      <dl className="grid grid-cols-2 gap-2 @lg:grid-cols-3">{children}</dl>
     </section>
   );
 }
 
-export function KitSheet({ workspaceId, kitId }: Props) {
-  const kit = useQuery({
-    queryKey: queryKeys.kit(workspaceId, kitId),
-    queryFn: ({ signal }) => api<{ kit: KitDetail }>(`/api/workspaces/${workspaceId}/kits/${kitId}`, { signal }).then((r) => r.kit),
-  });
-  const version = kit.data?.version;
-  const analysis = useQuery({
-    queryKey: [...queryKeys.kit(workspaceId, kitId), "analysis", version],
-    enabled: version !== undefined,
-    queryFn: ({ signal }) =>
-      api<{ analysis: AnalysisResult }>(`/api/workspaces/${workspaceId}/kits/${kitId}/analyze`, { method: "POST", body: { grid: { travelSteps: 21, steerSteps: 41 } }, signal }).then((r) => r.analysis),
-  });
-
-  if (kit.isPending) return <Spinner label="Loading the kit…" />;
-  if (kit.isError) return <ErrorNotice title="Could not load the kit" message={kit.error.message} onRetry={() => kit.refetch()} />;
-
+/** The whole analysis as a sheet of figures, charts and the cautions: the editor's "Sheet" tab. */
+export function AnalysisSheet({ analysis, stale }: { analysis: AnalysisResult | null; stale: boolean }) {
   return (
-    <div className="flex flex-col gap-6">
-      <div>
-        <Link href={`/workspaces/${workspaceId}/kits`} className="text-sm text-steel hover:underline">← All kits</Link>
-        <h1 className="mt-1 text-2xl font-semibold">{kit.data.name}</h1>
-        <p className="text-sm text-ink-muted">{kit.data.scale} · version {kit.data.version}{kit.data.createdByName ? ` · by ${kit.data.createdByName}` : ""}</p>
-        {kit.data.notes ? <p className="mt-2 max-w-3xl text-sm">{kit.data.notes}</p> : null}
-      </div>
-      {analysis.isPending ? (
-        <Spinner label="Analysing the front corner…" />
-      ) : analysis.isError ? (
-        <ErrorNotice title="This layout cannot be analysed" message={analysis.error.message} onRetry={() => analysis.refetch()} />
-      ) : (
-        <AnalysisView a={analysis.data} />
-      )}
+    <div className="@container flex flex-col gap-6" data-testid="analysis-sheet">
+      {stale ? <p className="text-xs font-medium text-amber-900">These figures are of an earlier layout: the one on screen has a fault or is still being analysed.</p> : null}
+      {analysis ? <AnalysisView a={analysis} /> : <p className="text-sm text-ink-muted">No figures yet: the layout has not been analysed.</p>}
       <aside className="rounded-lg border border-amber-300 bg-amber-50 p-3 text-sm text-amber-950">
         <p className="font-semibold">Cautions</p>
         <p>Strength figures are estimates: printed parts vary with layer direction, infill, temperature and moisture. A drivetrain spun up on the bench can throw fragments: guard it and wear eye protection. This is a design aid for models, not a sign-off for full-size or road vehicles.</p>
@@ -113,7 +79,7 @@ function AnalysisView({ a }: { a: AnalysisResult }) {
         <Figure label="Shear stress / allowable" value={`${fmt(s.shearStressMpa, 0)} / ${fmt(s.allowableShearMpa, 0, "MPa")}`} hint={s.allowableSource} />
         <Figure label="Smallest neck meeting the target" value={fmt(s.minimumNeckDiameterMm, 2, "mm")} />
       </Section>
-      <div className="grid gap-4 lg:grid-cols-3">
+      <div className="grid gap-4 @4xl:grid-cols-3">
         <TravelChart travel={a.travel} />
         <SteerLockChart perTravel={a.steerLock.perTravel} />
         <JointAngleChart steps={a.steering.steps} limitDeg={a.drive.jointLimitDeg} />
