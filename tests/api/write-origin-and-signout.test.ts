@@ -86,10 +86,21 @@ describe("writes are accepted only from the app's own origin, as JSON (point 6)"
     expect(textPlain.status).toBe(415);
     await w.unchanged();
 
-    // A body with no content type at all (fetch with a Blob body of no type sends none).
-    const res = await w.send({ rawBody: raw, headers: { "content-type": "" } });
-    expect(res.status).toBe(415);
+    const emptyType = await w.send({ rawBody: raw, headers: { "content-type": "" } });
+    expect(emptyType.status).toBe(415);
     await w.unchanged();
+  });
+
+  it("a body with no content type at all (what a no-cors fetch of bytes sends) → 415, nothing stored", async () => {
+    const req = new Request(`${BASE}/api/workspaces/${ws}/kits`, {
+      method: "POST",
+      headers: { cookie: owner.cookie, origin: new URL(BASE).origin },
+      body: new TextEncoder().encode(JSON.stringify({ name: "Untyped kit", scale: "1:10" })),
+    });
+    expect(req.headers.get("content-type")).toBeNull();
+    const res = await kitsRoute.POST(req, { params: Promise.resolve({ workspaceId: ws }) });
+    expect(res.status).toBe(415);
+    expect(await kitNames()).not.toContain("Untyped kit");
   });
 
   it("the same writes from the app's origin as application/json work", async () => {
