@@ -2,13 +2,31 @@ import { toNextJsHandler } from "better-auth/next-js";
 import { auth } from "@/server/auth/auth";
 import { forgetCachedSession } from "@/server/data/guard";
 import { withClientAddress } from "@/server/http/client-address";
+import { errorResponse, notFound } from "@/server/http/errors";
 
 const handler = toNextJsHandler(auth);
 
+/**
+ * better-auth's organization endpoints would let members be added or roles changed around the app's own
+ * members and invitations routes (and their last-owner and consent checks). Server code calls auth.api.*
+ * directly and no page calls them over HTTP, so from outside they do not exist. Case and doubled slashes
+ * are folded first, so no other spelling of the path gets through.
+ */
+function isOrganizationEndpoint(req: Request): boolean {
+  const path = new URL(req.url).pathname.toLowerCase().replace(/\/{2,}/g, "/");
+  return /^\/api\/auth\/organization(\/|$)/.test(path);
+}
+
+const hidden = () => errorResponse(notFound("That endpoint"));
+
 // The rate limit counts each request against the address withClientAddress resolves, never a raw header.
-export const GET = (req: Request) => handler.GET(withClientAddress(req));
+export async function GET(req: Request): Promise<Response> {
+  if (isOrganizationEndpoint(req)) return hidden();
+  return handler.GET(withClientAddress(req));
+}
 
 export async function POST(req: Request): Promise<Response> {
+  if (isOrganizationEndpoint(req)) return hidden();
   // A signed-out session must stop working on this instance at once, not when its memo lapses.
   if (new URL(req.url).pathname.endsWith("/sign-out")) forgetCachedSession(req.headers);
   return handler.POST(withClientAddress(req));
