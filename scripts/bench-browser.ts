@@ -168,7 +168,8 @@ try {
     const paint = await page.evaluate(() => performance.getEntriesByName("first-contentful-paint")[0]?.startTime ?? Number.NaN);
     await page.close();
     if (i === 0) continue; // the first load pays for compiling the route's code
-    figure.push(at);
+    // Laid out in a frame before the first contentful one still shows only from that paint on.
+    figure.push(Math.max(at, paint));
     firstPaint.push(paint);
   }
   console.log(`Kit page on the demo kit, ${LOADS} loads after one warm-up (time from navigation start):`);

@@ -1,5 +1,5 @@
 "use client";
-import { useMemo } from "react";
+import { useDeferredValue, useMemo } from "react";
 // The front view (y–z, seen from ahead): arms, knuckle, kingpin axis to the ground, wheel and tyre, the
 // drive shaft between its joints; the instant and roll centres as construction.
 import { handlesOf } from "../document/handles";
@@ -20,7 +20,8 @@ export function FrontView() {
   const show = useEditor((s) => s.settings.show);
   const unit = useEditor((s) => s.settings.lengthUnit);
   const fault = useEditor((s) => s.live.fault);
-  const analysis = useEditor((s) => s.live.analysis);
+  // Low priority: during a drag the readouts paint first, the drawing's figures follow a frame later.
+  const analysis = useDeferredValue(useEditor((s) => s.live.analysis));
   const previewing = useEditor((s) => s.preview.rackMm !== 0 || s.preview.travelMm !== 0);
   const box = useMemo(() => frontBox(layout), [layout]);
   const d = pose ? frontDrawing(pose, layout) : null;

@@ -1,7 +1,7 @@
 "use client";
 // The joint section: the neck in its cup at the articulation of the previewed pose (the wheel whose
 // joint bends more), coloured by clearance, with the contact point and the gap figured on the drawing.
-import { useMemo } from "react";
+import { useDeferredValue, useMemo } from "react";
 import { fmt, limitLabel } from "@/lib/format";
 import { useEditor } from "../store/editor-context";
 import { formatLength } from "../units/length-unit";
@@ -15,7 +15,8 @@ import { ViewFrame } from "./view-frame";
 export function JointSectionView() {
   const { layout, pose } = useShownPose();
   const unit = useEditor((s) => s.settings.lengthUnit);
-  const analysis = useEditor((s) => s.live.analysis);
+  // Low priority: during a drag the readouts paint first, the drawing's figures follow a frame later.
+  const analysis = useDeferredValue(useEditor((s) => s.live.analysis));
   const show = useEditor((s) => s.settings.show.dimensions);
   const d = layout.drive;
   const wheel = pose ? worseWheel(pose) : "left";

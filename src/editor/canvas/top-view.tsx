@@ -2,7 +2,7 @@
 // The top view (x–y, seen from above, drawn in line with the front view so y runs the same way; forward
 // is down the screen): both front wheels at the previewed steer, steering arms, tie rods and the rack,
 // the shafts, and the turning construction (the wheel axes, where they meet, and the rear axle line).
-import { useMemo } from "react";
+import { useDeferredValue, useMemo } from "react";
 import { fmt } from "@/lib/format";
 import { handlesOf } from "../document/handles";
 import { useEditor } from "../store/editor-context";
@@ -38,7 +38,8 @@ export function TopView() {
   const show = useEditor((s) => s.settings.show);
   const unit = useEditor((s) => s.settings.lengthUnit);
   const fault = useEditor((s) => s.live.fault);
-  const analysis = useEditor((s) => s.live.analysis);
+  // Low priority: during a drag the readouts paint first, the drawing's figures follow a frame later.
+  const analysis = useDeferredValue(useEditor((s) => s.live.analysis));
   const previewing = useEditor((s) => s.preview.rackMm !== 0 || s.preview.travelMm !== 0);
   const box = useMemo(() => topBox(layout), [layout]);
   const d = pose ? topDrawing(pose, layout) : null;
