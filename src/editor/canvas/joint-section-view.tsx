@@ -29,7 +29,7 @@ export function JointSectionView() {
   const box = useMemo(() => ({ ...section.extent, maxV: Math.max(section.extent.maxV, d.cupMouthDiameterMm * 1.4) }), [section.extent, d.cupMouthDiameterMm]);
   const colour = CLEARANCE_COLOUR[valid ? section.state : "touching"];
   const limit = analysis?.drive.jointLimitDeg ?? null;
-  const state = valid ? CLEARANCE_LABEL[section.state] : "neck wider than the mouth";
+  const state = valid ? CLEARANCE_LABEL[section.state] : "wider than the mouth";
   const summary = section.clearanceMm !== null
     ? `${wheel} wheel, joint at ${fmt(beta, 1, "°")}: neck ${state}, gap ${formatLength(section.clearanceMm, unit, 2)}`
     : `${wheel} wheel, joint at ${fmt(beta, 1, "°")}: slot ${state}, ${fmt((d.slotLimitDeg ?? 0) - beta, 1, "°")} to the slot end`;
