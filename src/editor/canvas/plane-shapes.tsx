@@ -23,9 +23,11 @@ export function PlaneDot({ t, at, radiusPx = 3.5, fill = INK.knuckle, stroke, wi
   return <Circle listening={false} x={x} y={y} radius={radiusPx} fill={fill} stroke={stroke} strokeWidth={width} perfectDrawEnabled={false} />;
 }
 
-export function PlaneLabel({ t, at, text, colour = INK.label, dx = 6, dy = -14, size = 11, bold = false }: { t: ViewTransform; at: PlanePoint; text: string; colour?: string; dx?: number; dy?: number; size?: number; bold?: boolean }) {
+/** A figure at a point, offset by (dx, dy) px; `align="center"` centres it on the offset point. */
+export function PlaneLabel({ t, at, text, colour = INK.label, dx = 6, dy = -14, size = 11, bold = false, align = "left" }: { t: ViewTransform; at: PlanePoint; text: string; colour?: string; dx?: number; dy?: number; size?: number; bold?: boolean; align?: "left" | "center" }) {
   const [x, y] = planeToScreen(t, at);
-  return <Text listening={false} x={x + dx} y={y + dy} text={text} fontSize={size} fontFamily={CANVAS_FONT} fontStyle={bold ? "bold" : "normal"} fill={colour} perfectDrawEnabled={false} />;
+  const box = align === "center" ? { x: x + dx - LABEL_BOX_PX / 2, width: LABEL_BOX_PX, align: "center" as const } : { x: x + dx };
+  return <Text listening={false} {...box} y={y + dy} text={text} fontSize={size} fontFamily={CANVAS_FONT} fontStyle={bold ? "bold" : "normal"} fill={colour} perfectDrawEnabled={false} />;
 }
 
 /**
