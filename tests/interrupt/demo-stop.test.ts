@@ -6,7 +6,8 @@
 import { rmSync } from "node:fs";
 import { join } from "node:path";
 import { afterAll, afterEach, beforeAll, describe, expect, it } from "vitest";
-import { endLeftovers, expectNothingLeft, freePort, snapshot, type Started } from "./helpers/stopping";
+import { freePort } from "../helpers/ports";
+import { endLeftovers, expectNothingLeft, snapshot, type Started } from "./helpers/stopping";
 import { openTerminal, repoRoot, type Terminal } from "./helpers/terminal";
 
 const CLUSTER = "pg-interrupt-demo";

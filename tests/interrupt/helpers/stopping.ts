@@ -1,34 +1,10 @@
 // What every interrupt test checks once a command was stopped: it ended, and nothing it started is left.
 import { existsSync } from "node:fs";
-import { createServer, connect } from "node:net";
 import { join } from "node:path";
 import { expect } from "vitest";
+import { listening } from "../../helpers/ports";
 import { dataDirOf, descendants, listProcesses, postgresOn, stillRunning, type Proc } from "./processes";
 import { sleep, type Terminal } from "./terminal";
-
-/** A port nothing listens on now (the kernel's pick on 127.0.0.1). */
-export function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const server = createServer();
-    server.once("error", reject);
-    server.listen(0, "127.0.0.1", () => {
-      const { port } = server.address() as { port: number };
-      server.close(() => resolve(port));
-    });
-  });
-}
-
-/** Whether something accepts connections on 127.0.0.1:port. */
-export function listening(port: number): Promise<boolean> {
-  return new Promise((resolve) => {
-    const socket = connect({ host: "127.0.0.1", port });
-    socket.once("connect", () => {
-      socket.destroy();
-      resolve(true);
-    });
-    socket.once("error", () => resolve(false));
-  });
-}
 
 /** What a running command started: its process tree, and the PostgreSQL server on `pgPort` (which pg_ctl detached from it). */
 export interface Started {

@@ -36,7 +36,8 @@ export function openTerminal(command: string, env: Record<string, string>): Term
   // -q quiet, -f flush at once, -e return the command's exit code, -c the command; /dev/null: no typescript file.
   const child: ChildProcess = spawn("script", ["-qfec", command, "/dev/null"], {
     cwd: repoRoot,
-    env: { ...base, SHELL: "/bin/sh", TERM: "xterm", ...env },
+    // A bare environment on purpose (no NODE_ENV, which the project types as always set).
+    env: { ...base, SHELL: "/bin/sh", TERM: "xterm", ...env } as unknown as NodeJS.ProcessEnv,
     stdio: ["pipe", "pipe", "pipe"],
   });
   let text = "";
