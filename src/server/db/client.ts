@@ -71,8 +71,11 @@ export async function pingDatabase(timeoutMs: number): Promise<{ ok: true; ms: n
     if (outcome === "timeout") return { ok: false, reason: `no answer within ${timeoutMs} ms` };
     return { ok: true, ms: Math.round(performance.now() - started) };
   } catch (error) {
-    const code = (error as { cause?: { code?: unknown } }).cause?.code ?? (error as { code?: unknown }).code;
-    return { ok: false, reason: typeof code === "string" ? code : "query failed" };
+    // The driver's own error (Drizzle wraps it as `cause`): its code, else its message, which for a
+    // connection failure holds no data ("timeout exceeded when trying to connect").
+    const inner = ((error as { cause?: unknown }).cause ?? error) as { code?: unknown; message?: unknown };
+    const reason = typeof inner.code === "string" ? inner.code : typeof inner.message === "string" ? inner.message.slice(0, 120) : "query failed";
+    return { ok: false, reason };
   } finally {
     clearTimeout(timer);
   }
