@@ -1,7 +1,8 @@
 // `npm test` stopped by Ctrl-C while its tests run (pressed again while it stops): vitest, the app and the
 // throwaway PostgreSQL end before the prompt returns, and the closing line does not read as a pass.
 // A short run of one file (KB_TEST_FILES), with its own cluster and report beside the run that started it.
-import { afterEach, expect, it } from "vitest";
+import { rmSync } from "node:fs";
+import { afterAll, afterEach, expect, it } from "vitest";
 import { descendants } from "./helpers/processes";
 import { endLeftovers, expectNothingLeft, snapshot, type Started } from "./helpers/stopping";
 import { openTerminal, sleep, type Terminal } from "./helpers/terminal";
@@ -12,6 +13,10 @@ let pgPort = 0;
 
 afterEach(async () => {
   await endLeftovers(term, pgPort, started);
+});
+
+afterAll(() => {
+  if (started) rmSync(started.pgDataDir, { recursive: true, force: true }); // a throwaway cluster, fresh on every run
 });
 
 it("npm test stops its tests and its database on Ctrl-C, and reports the run as failed", async () => {

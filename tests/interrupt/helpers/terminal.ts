@@ -40,6 +40,8 @@ export function openTerminal(command: string, env: Record<string, string>): Term
     env: { ...base, SHELL: "/bin/sh", TERM: "xterm", ...env } as unknown as NodeJS.ProcessEnv,
     stdio: ["pipe", "pipe", "pipe"],
   });
+  // A key typed after the command ended has nowhere to go: not an error of the test.
+  child.stdin!.on("error", () => {});
   let text = "";
   const onData = (chunk: Buffer) => {
     text += chunk.toString("utf8");
