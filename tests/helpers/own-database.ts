@@ -27,6 +27,27 @@ export interface OwnDatabase {
   remove(): Promise<void>;
 }
 
+/**
+ * Points the app's modules, imported after this call, at `url` (with `extra` settings); the returned function
+ * ends that pool and puts the environment back, so nothing of it outlives the test file whichever way vitest
+ * reuses its workers (client.ts keeps its pool on globalThis).
+ */
+export function useDatabaseUrl(url: string, extra: Record<string, string> = {}): () => Promise<void> {
+  const names = ["DATABASE_URL", ...Object.keys(extra)];
+  const saved = Object.fromEntries(names.map((n) => [n, process.env[n]]));
+  Object.assign(process.env, { DATABASE_URL: url, ...extra });
+  const global = globalThis as { knucklebenchDb?: { $client?: { end(): Promise<void> } } };
+  delete global.knucklebenchDb;
+  return async () => {
+    await global.knucklebenchDb?.$client?.end().catch(() => {});
+    delete global.knucklebenchDb;
+    for (const n of names) {
+      if (saved[n] === undefined) delete process.env[n];
+      else process.env[n] = saved[n];
+    }
+  };
+}
+
 /** Starts a fresh cluster NAME on PORT and applies the migrations. */
 export async function startOwnDatabase(name: string, port: number): Promise<OwnDatabase> {
   const cluster = `'${name}' ${port}`;

@@ -8,7 +8,7 @@
 // at it: env.ts reads the environment when it loads.
 import { randomUUID } from "node:crypto";
 import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it, vi, type MockInstance } from "vitest";
-import { startOwnDatabase, type OwnDatabase } from "../helpers/own-database";
+import { startOwnDatabase, useDatabaseUrl, type OwnDatabase } from "../helpers/own-database";
 import { freePort } from "../helpers/ports";
 
 type P = { workspaceId: string };
@@ -23,7 +23,7 @@ let owner: Awaited<ReturnType<(typeof import("../helpers/api"))["signUp"]>>;
 let unseen: Awaited<ReturnType<(typeof import("../helpers/api"))["signUp"]>>;
 let ws: string;
 let storedKitNames: () => Promise<string[]>;
-let closePool: () => Promise<void>;
+let restore: (() => Promise<void>) | undefined;
 
 const uncaught: unknown[] = [];
 const onUncaught = (error: unknown) => uncaught.push(error);
@@ -32,7 +32,7 @@ let error: MockInstance<typeof console.error>;
 
 beforeAll(async () => {
   database = await startOwnDatabase("pg-outage", await freePort());
-  process.env.DATABASE_URL = database.url;
+  restore = useDatabaseUrl(database.url);
   api = await import("../helpers/api");
   kitsRoute = await import("@/app/api/workspaces/[workspaceId]/kits/route");
   readyRoute = await import("@/app/api/health/ready/route");
@@ -46,13 +46,11 @@ beforeAll(async () => {
   unseen = await api.signUp("Outage Newcomer");
   const list = await api.call(workspacesRoute.GET, "GET", "/api/workspaces", {}, { cookie: owner.cookie });
   ws = list.json.workspaces[0].id;
-  // Drizzle keeps the pool as $client (the Db type leaves it out): ended before the cluster is removed.
-  closePool = () => (db as unknown as { $client: { end(): Promise<void> } }).$client.end();
   storedKitNames = async () => (await db.select({ name: kits.name }).from(kits).where(eq(kits.workspaceId, ws))).map((k) => k.name);
 }, 180_000);
 
 afterAll(async () => {
-  await closePool?.();
+  await restore?.(); // ends the pool before the cluster goes
   await database?.remove();
 });
 
@@ -166,6 +164,7 @@ describe("a restart under concurrent writes", () => {
       await database.start();
     }
 
+    console.log(`restart under 4 writers: ${acknowledged.length} writes acknowledged, ${refused.length} answered 503`);
     expect(other).toEqual([]);
     expect(refused.length, "writes met the outage").toBeGreaterThan(0);
     expect(acknowledged.length).toBeGreaterThanOrEqual(40);
