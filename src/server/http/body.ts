@@ -89,3 +89,12 @@ export async function readJson<S extends z.ZodType>(req: Request, schema: S, lim
   if (!parsed.success) throw invalid(parsed.error);
   return parsed.data;
 }
+
+/** Parses the query string against a schema (first value of each parameter): 422 naming each parameter. */
+export function readQuery<S extends z.ZodType>(req: Request, schema: S): z.infer<S> {
+  const input: Record<string, string> = {};
+  for (const [k, v] of new URL(req.url).searchParams) if (!(k in input)) input[k] = v;
+  const parsed = schema.safeParse(input);
+  if (!parsed.success) throw invalid(parsed.error, "query");
+  return parsed.data;
+}
