@@ -135,7 +135,7 @@ export async function requireWorkspaceAccess<R extends Resource>(
     .limit(1);
   if (!row) throw notAMember();
   if (!roleCan(row.role, resource, action)) {
-    throw forbidden(`A ${row.role} of this workspace may not ${action} ${RESOURCE_WORDS[resource] ?? `${resource}s`}.`);
+    throw forbidden(`${/^[aeiou]/i.test(row.role) ? "An" : "A"} ${row.role} of this workspace may not ${action} ${RESOURCE_WORDS[resource] ?? `${resource}s`}.`);
   }
   return { ...signed, workspace: { id: row.id, name: row.name, slug: row.slug }, role: row.role };
 }

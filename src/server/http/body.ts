@@ -1,6 +1,6 @@
 import type { z } from "zod";
 import { env } from "../env";
-import { HttpError, invalid } from "./errors";
+import { fieldIssues, HttpError, invalid } from "./errors";
 
 /** Reads at most `limit` bytes of the body, so a huge upload is refused without buffering it. */
 async function readTextCapped(req: Request, limit: number): Promise<string> {
@@ -95,6 +95,9 @@ export function readQuery<S extends z.ZodType>(req: Request, schema: S): z.infer
   const input: Record<string, string> = {};
   for (const [k, v] of new URL(req.url).searchParams) if (!(k in input)) input[k] = v;
   const parsed = schema.safeParse(input);
-  if (!parsed.success) throw invalid(parsed.error, "query");
+  if (!parsed.success) {
+    const fields = fieldIssues(parsed.error).map((f) => (f.path === "(body)" ? { ...f, path: "(query)" } : f));
+    throw new HttpError(422, "invalid", `Invalid query: ${fields[0]!.path}: ${fields[0]!.message}`, fields);
+  }
   return parsed.data;
 }

@@ -14,7 +14,7 @@ export const GET = workspaceRoute<Params, "shelf">("shelf", "read", async (_req,
 // Changing an item rewrites the kits that use it (a revision each), so it needs the right to change kits too;
 // until the caller confirms exactly those kits, the answer is 409 `confirm_kits` listing them.
 export const PATCH = workspaceRoute<Params, "shelf">("shelf", "update", async (req, access, params) => {
-  if (!roleCan(access.role, "kit", "update")) throw forbidden(`A ${access.role} of this workspace may not change kits.`);
+  if (!roleCan(access.role, "kit", "update")) throw forbidden(`${/^[aeiou]/i.test(access.role) ? "An" : "A"} ${access.role} of this workspace may not change kits.`);
   const id = shelfItemIdOrNotFound(params.itemId);
   const body = await readJson(req, shelfItemPatchBody);
   return Response.json(await updateShelfItem(access.workspace.id, id, access.user.id, body));
