@@ -102,7 +102,15 @@ export function OverlayView({ items, view, steer, labels }: { items: readonly Co
     }),
     [items, steer],
   );
-  const box = union(posed.map((p) => (view === "front" ? frontBox(p.layout) : topBox(p.layout))));
+  // The static frame of every layout, widened to take in each wheel as posed (a steered wheel swings out).
+  const box = union([
+    ...posed.map((p) => (view === "front" ? frontBox(p.layout) : topBox(p.layout))),
+    ...posed.flatMap((p) => {
+      const drawn = view === "front" ? frontDrawing(p.pose, p.layout).tyre : [...topDrawing(p.pose, p.layout).left.tyre, ...topDrawing(p.pose, p.layout).right.tyre];
+      const b = boxOf(drawn);
+      return b ? [b] : [];
+    }),
+  ]);
   const t = box ? fitBox(box, W, H, 18) : null;
   const title = view === "front" ? "Front view, overlaid (seen from ahead; y left →, z up ↑)" : "Top view, overlaid (seen from above; forward is down)";
   const missing = items.map((it, i) => (posed.some((p) => p.index === i) ? null : labels[i])).filter(Boolean);
