@@ -69,18 +69,19 @@ async function fill(pool: Pool, workspaceId: string, userId: string): Promise<vo
       const s = v.summary as { lockDeg: number; lockLimitedBy: string; maxJointAngleDeg: number; ackermannPct: number | null; safetyFactor: number; neckClearanceMm: number | null };
       const tags = [TAGS[i % TAGS.length]!, TAGS[(i * 3 + 1) % TAGS.length]!].filter((t, x, a) => a.indexOf(t) === x);
       const p = rows.length;
-      values.push(`($${p + 1}, $${p + 2}, $${p + 3}, $${p + 4}, $${p + 5}::jsonb, $${p + 6}, $${p + 7}, $${p + 8}, $${p + 9}, $${p + 10}, $${p + 11}, $${p + 12}, $${p + 13}, now() - ($${p + 14} || ' minutes')::interval)`);
-      rows.push(workspaceId, `Bench kit ${String(i + 1).padStart(5, "0")}`, SCALES[i % SCALES.length], `{${tags.map((t) => `"${t}"`).join(",")}}`, JSON.stringify(v.layout), s.lockDeg, s.lockLimitedBy, s.maxJointAngleDeg, s.ackermannPct, s.safetyFactor, s.neckClearanceMm, userId, userId, String(i));
+      values.push(`($${p + 1}, $${p + 2}, $${p + 3}, $${p + 4}, $${p + 5}, $${p + 6}, $${p + 7}, $${p + 8}, $${p + 9}, $${p + 10}, $${p + 11}, $${p + 12}, now() - ($${p + 13} || ' minutes')::interval)`);
+      rows.push(workspaceId, `Bench kit ${String(i + 1).padStart(5, "0")}`, SCALES[i % SCALES.length], `{${tags.map((t) => `"${t}"`).join(",")}}`, s.lockDeg, s.lockLimitedBy, s.maxJointAngleDeg, s.ackermannPct, s.safetyFactor, s.neckClearanceMm, userId, userId, String(i));
     }
-    const { rows: made } = await pool.query<{ id: string; layout: unknown }>(
-      `insert into kits (workspace_id, name, scale, tags, layout, lock_deg, lock_limited_by, max_joint_angle_deg, ackermann_pct, safety_factor, neck_clearance_mm, created_by, updated_by, updated_at)
-       values ${values.join(", ")} returning id, layout`,
+    const { rows: made } = await pool.query<{ id: string }>(
+      `insert into kits (workspace_id, name, scale, tags, lock_deg, lock_limited_by, max_joint_angle_deg, ackermann_pct, safety_factor, neck_clearance_mm, created_by, updated_by, updated_at)
+       values ${values.join(", ")} returning id`,
       rows,
     );
-    // Every kit has its revision 1, as the app would make it.
+    // Every kit has its revision 1 (its layout and cached summary), as the app would make it.
     const revRows: unknown[] = [];
     const revValues = made.map((m, k) => {
-      revRows.push(m.id, JSON.stringify(m.layout), JSON.stringify(layouts[((from + k) * 7919) % layouts.length]!.summary), userId);
+      const v = layouts[((from + k) * 7919) % layouts.length]!;
+      revRows.push(m.id, JSON.stringify(v.layout), JSON.stringify(v.summary), userId);
       return `($${k * 4 + 1}, 1, $${k * 4 + 2}::jsonb, $${k * 4 + 3}::jsonb, 'create', $${k * 4 + 4})`;
     });
     await pool.query(`insert into kit_revisions (kit_id, number, layout, summary, kind, author_id) values ${revValues.join(", ")}`, revRows);
@@ -109,7 +110,7 @@ const me = (await (await fetch(`${base}/api/workspaces`, { headers: { cookie } }
 const workspaceId = me.workspaces[0]!.id;
 const pool = new Pool({ connectionString: databaseUrl, max: 2 });
 try {
-  const { rows } = await pool.query<{ id: string }>("select user_id as id from members where organization_id = $1 limit 1", [workspaceId]);
+  const { rows } = await pool.query<{ id: string }>("select user_id as id from workspace_members where workspace_id = $1 limit 1", [workspaceId]);
   console.log(`Library page of ${PAGE_SIZE} from ${KITS} kits in one workspace, sorted by a readout column, ${SAMPLES} requests each, one at a time:`);
   await fill(pool, workspaceId, rows[0]!.id);
 } finally {
