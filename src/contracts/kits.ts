@@ -1,4 +1,6 @@
 import { z } from "zod";
+import { revisionNote } from "./revisions";
+import { targetOverridesSchema, type Readouts, type TargetOverrides } from "./targets";
 import { isStorableText, PG_INTEGER_MAX, storableTextMessage } from "./text";
 
 // Bodies of the kits API. The layout document itself is validated by ./layout (schema-versioned).
@@ -24,18 +26,42 @@ const version = z
   // is one below the column's maximum.
   .max(PG_INTEGER_MAX - 1, `Version must be at most ${PG_INTEGER_MAX - 1}`);
 
+/** A tag: lower-case letters, digits, spaces and - _ . : / +, 1–32 characters (kept lower-case). */
+export const KIT_TAG_PATTERN = /^[\p{Ll}\p{Lo}\p{N}][\p{Ll}\p{Lo}\p{N} _.:/+-]*$/u;
+export const MAX_KIT_TAGS = 12;
+export const kitTag = z
+  .string({ error: "A tag must be text" })
+  .trim()
+  .toLowerCase()
+  .min(1, "A tag must not be empty")
+  .max(32, "A tag must be at most 32 characters")
+  .regex(KIT_TAG_PATTERN, "A tag may hold letters, digits, spaces and - _ . : / + (starting with a letter or digit)");
+const kitTags = z
+  .array(kitTag, { error: "Tags must be a list of text" })
+  .max(MAX_KIT_TAGS, `A kit takes at most ${MAX_KIT_TAGS} tags`)
+  .transform((tags) => [...new Set(tags)]);
+
 export const kitCreateFields = z.object({
   name: kitName,
   scale: kitScale,
   notes: kitNotes.optional(),
+  tags: kitTags.optional(),
 });
 export type KitCreateFields = z.infer<typeof kitCreateFields>;
 
 export const kitPatchBody = z
-  .object({ version, name: kitName.optional(), scale: kitScale.optional(), notes: kitNotes.optional() })
+  .object({
+    version,
+    name: kitName.optional(),
+    scale: kitScale.optional(),
+    notes: kitNotes.optional(),
+    tags: kitTags.optional(),
+    archived: z.boolean({ error: "Archived must be true or false" }).optional(),
+    targets: targetOverridesSchema.optional(),
+  })
   .strict()
-  .refine((b) => b.name !== undefined || b.scale !== undefined || b.notes !== undefined, {
-    message: "Send at least one of name, scale or notes",
+  .refine((b) => Object.keys(b).some((k) => k !== "version"), {
+    message: "Send at least one of name, scale, notes, tags, archived or targets",
     path: ["name"],
   });
 export type KitPatchBody = z.infer<typeof kitPatchBody>;
@@ -43,6 +69,23 @@ export type KitPatchBody = z.infer<typeof kitPatchBody>;
 export const kitIdParam = z.string().uuid("Kit id must be a UUID");
 
 export { version as versionField };
+
+/** PUT /api/workspaces/{w}/kits/{k}/layout: the layout, the version it was based on, and an optional note. */
+export const layoutSaveFields = { version, note: revisionNote.optional() };
+
+/** POST …/revisions/{n}/restore: the kit version the restore is based on, and an optional note. */
+export const revisionRestoreBody = z.object({ version, note: revisionNote.optional() }).strict();
+
+/** POST …/kits/{k}/variants: a new kit made from this kit's head (or one revision), remembering where it came from. */
+export const variantCreateBody = z
+  .object({
+    name: kitName,
+    revision: z.number({ error: "Revision must be a number" }).int("Revision must be a whole number").min(1, "Revision starts at 1").max(PG_INTEGER_MAX, "Revision is too large").optional(),
+    scale: kitScale.optional(),
+    notes: kitNotes.optional(),
+    tags: kitTags.optional(),
+  })
+  .strict();
 
 /** A kit as the API lists it (dates as ISO strings). */
 export type KitSummary = {
@@ -58,6 +101,18 @@ export type KitSummary = {
   updatedByName: string | null;
   createdAt: string;
   updatedAt: string;
+  tags: string[];
+  /** The number of the head revision (the layout the kit shows). */
+  headRevision: number;
+  archivedAt: string | null;
+  /** The kit and revision a variant was made from (the kit id is null once that kit is deleted). */
+  originKitId: string | null;
+  originKitName: string | null;
+  originRevision: number | null;
+  targetOverrides: TargetOverrides;
+  /** The head revision's key readouts (null where the layout could not be analysed or has no such figure). */
+  readouts: Readouts;
+  lockLimitedBy: string | null;
 };
 
 /** A kit with its layout document, as GET /api/workspaces/{w}/kits/{k} returns it. */

@@ -6,6 +6,7 @@
  */
 import { z } from "zod";
 import type { KitLayout } from "@/engine/kit-layout";
+import { shelfRefsSchema } from "./shelf-refs";
 import { isStorableText, storableTextMessage } from "./text";
 
 /** Current version of the layout document. */
@@ -72,6 +73,9 @@ const topViewSchema = z.strictObject({
   wheelbaseMm: bounded("topView.wheelbaseMm", "mm", 50, 5000),
 });
 
+/** Shear allowable rules: S_y/√3 (distortion energy) or S_y/2 (maximum shear, Tresca). */
+export const SHEAR_RULES = ["distortion-energy", "tresca"] as const;
+
 export const JOINT_TYPES = ["dogbone", "cvd", "cv-ball", "single-cardan", "double-cardan"] as const;
 
 const driveSchema = z.strictObject({
@@ -109,6 +113,10 @@ const materialSchema = z.discriminatedUnion("kind", [
     source: text("strength.material.source", 500),
     printed: z.boolean(),
     derate: bounded("strength.material.derate", "", 0.01, 1).describe("Factor on the yield of a printed part"),
+    shearRule: z
+      .enum(SHEAR_RULES, { error: `strength.material.shearRule must be one of ${SHEAR_RULES.join(", ")}` })
+      .optional()
+      .describe("How the shear allowable follows from the yield; absent = distortion-energy"),
   }),
 ]);
 
@@ -135,6 +143,8 @@ const layoutObjectSchema = z.strictObject({
   topView: topViewSchema,
   drive: driveSchema,
   strength: strengthSchema,
+  // Which workspace shelf items the figures were taken from (the figures themselves stay in the layout).
+  shelf: shelfRefsSchema.optional(),
 });
 
 /**

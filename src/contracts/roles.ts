@@ -7,6 +7,8 @@ export const statement = {
   member: ["read", "create", "update", "delete"],
   invitation: ["create", "cancel"],
   kit: ["read", "create", "update", "delete"],
+  shelf: ["read", "create", "update", "delete"],
+  target: ["read", "update"],
 } as const;
 
 export type Resource = keyof typeof statement;
@@ -16,10 +18,12 @@ export type Grants = { [R in Resource]?: readonly Action<R>[] };
 export const WORKSPACE_ROLES = ["owner", "admin", "editor", "viewer"] as const;
 export type WorkspaceRole = (typeof WORKSPACE_ROLES)[number];
 
-const viewer = { kit: ["read"], member: ["read"] } as const satisfies Grants;
-const editor = { kit: ["read", "create", "update", "delete"], member: ["read"] } as const satisfies Grants;
+const viewer = { kit: ["read"], member: ["read"], shelf: ["read"], target: ["read"] } as const satisfies Grants;
+const editor = { kit: ["read", "create", "update", "delete"], member: ["read"], shelf: ["read", "create", "update", "delete"], target: ["read"] } as const satisfies Grants;
+// The workspace's targets are the team's bar: admins set them; editors override them per kit.
 const admin = {
   ...editor,
+  target: ["read", "update"],
   organization: ["update"],
   member: ["read", "create", "update", "delete"],
   invitation: ["create", "cancel"],
@@ -30,9 +34,9 @@ export const roleGrants: Record<WorkspaceRole, Grants> = { owner, admin, editor,
 
 export const ROLE_DESCRIPTIONS: Record<WorkspaceRole, string> = {
   owner: "Everything, including deleting the workspace and naming other owners",
-  admin: "Manages members and roles, and edits kits",
-  editor: "Creates, edits and deletes kits",
-  viewer: "Reads kits and analyses",
+  admin: "Manages members and roles and the workspace's targets, and edits kits",
+  editor: "Creates, edits and deletes kits and shelf items",
+  viewer: "Reads kits, analyses, the shelf and the targets",
 };
 
 export function isWorkspaceRole(value: unknown): value is WorkspaceRole {

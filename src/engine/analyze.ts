@@ -509,6 +509,7 @@ export function analyzeLayout(layout: KitLayout, options: AnalyzeOptions = {}): 
     shaftsSharing: st.shaftsSharing,
     neck: { diameterMm: drive.neckDiameterMm, boreMm: drive.boreDiameterMm },
     material: materialFigure(st.material),
+    criterion: st.material.kind === "custom" ? st.material.shearRule : undefined,
     targetSafetyFactor: st.targetSafetyFactor,
   });
 

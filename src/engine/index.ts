@@ -13,6 +13,7 @@ export type { Vec2 } from "./math/vec2";
 export { cornerPoser, cornerPoseAt, wheelAxesMeet, type CornerPose, type CornerPoser, type WheelPose } from "./corner-pose";
 export { cupArticulationLimit, neckClearanceMm } from "./drive/neck-contact";
 export { MATERIALS } from "./strength/materials";
+export { DRIVE_JOINT_TYPES, type DriveJointType } from "./drive/joint-types";
 export {
   neckTradeoff,
   neckTradeoffRangeMm,

@@ -86,6 +86,8 @@ export type KitMaterial =
       readonly printed: boolean;
       /** Factor (0, 1] applied to the yield strength of a printed part for layer direction. */
       readonly derate: number;
+      /** The shear allowable rule (allowable.ts); absent = distortion energy. */
+      readonly shearRule?: "distortion-energy" | "tresca";
     };
 
 export interface KitStrength {

@@ -27,7 +27,7 @@ export function AppShell({
           </div>
         </div>
       </header>
-      <main className="mx-auto w-full max-w-6xl flex-1 px-4 py-6 has-[[data-editor]]:flex has-[[data-editor]]:min-h-0 has-[[data-editor]]:max-w-none has-[[data-editor]]:flex-col has-[[data-editor]]:p-0">{children}</main>
+      <main className="mx-auto w-full max-w-6xl flex-1 px-4 py-6 has-[[data-wide]]:max-w-[96rem] has-[[data-editor]]:flex has-[[data-editor]]:min-h-0 has-[[data-editor]]:max-w-none has-[[data-editor]]:flex-col has-[[data-editor]]:p-0">{children}</main>
       <footer className="border-t border-ink/10 px-4 py-3 text-center text-xs text-ink-muted">
         Strength figures are estimates. A design aid for models — not a sign-off for full-size or road vehicles.
       </footer>

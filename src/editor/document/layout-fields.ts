@@ -111,8 +111,9 @@ export const FIELD_GROUPS: readonly FieldGroup[] = [
       { path: "strength.material.yieldMpa", label: "Tensile yield", kind: "number", unit: "MPa", when: { path: "strength.material.kind", equals: "custom" }, hint: "across-layer strength for a printed part" },
       { path: "strength.material.printed", label: "Printed part", kind: "boolean", when: { path: "strength.material.kind", equals: "custom" } },
       { path: "strength.material.derate", label: "Derate factor", kind: "number", when: { path: "strength.material.kind", equals: "custom" } },
+      { path: "strength.material.shearRule", label: "Shear rule", kind: "choice", choices: [{ value: "distortion-energy", label: "Distortion energy, S_y/√3" }, { value: "tresca", label: "Maximum shear, S_y/2" }], when: { path: "strength.material.kind", equals: "custom" } },
       { path: "strength.material.source", label: "Source of the figures", kind: "text", when: { path: "strength.material.kind", equals: "custom" } },
-      { path: "strength.targetSafetyFactor", label: "Target safety factor", kind: "number" },
+      { path: "strength.targetSafetyFactor", label: "Design safety factor", kind: "number", hint: "sizes the smallest neck and the trade-off; the kit's targets judge the readouts" },
     ],
   },
 ];

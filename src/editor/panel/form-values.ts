@@ -31,6 +31,7 @@ const VARIANT_STARTS: Record<string, number | string | boolean> = {
   "strength.material.printed": true,
   "strength.material.derate": 0.5,
   "strength.material.source": "",
+  "strength.material.shearRule": "distortion-energy",
   "drive.slotLimitDeg": 30,
 };
 
@@ -146,6 +147,8 @@ export function formToLayout(values: FormValues, unit: LengthUnit, base: Layout)
     if (v !== undefined) ratios.push(v);
   }
   put(GEAR_RATIOS, ratios);
+  // Not a field of the panel: which shelf items the figures came from carries over as it was.
+  if (base.shelf) put("shelf", base.shelf);
   if (Object.keys(errors).length > 0) return { ok: false, errors };
 
   const parsed = layoutFieldsSchema.safeParse(doc);

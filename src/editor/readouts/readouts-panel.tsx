@@ -1,12 +1,15 @@
 "use client";
 // The live figures: rendered with the page from the server's analysis, then replaced by the worker's as
 // the designer edits. When the layout is impossible the last valid figures stay, marked out of date.
+import { useKitTargets } from "../library/library-context";
+import { judgeReadoutGroups } from "../library/readout-verdicts";
 import { useEditor } from "../store/editor-context";
 import { readoutGroups, zeroLockNote } from "./readout-figures";
 
 export function ReadoutsPanel() {
   const live = useEditor((s) => s.live);
   const unit = useEditor((s) => s.settings.lengthUnit);
+  const targets = useKitTargets();
   const a = live.analysis;
   return (
     <section aria-label="Live readouts" data-testid="readouts" data-seq={live.seq} data-quality={live.quality} data-stale={live.stale ? "true" : "false"} className="flex flex-col gap-3">
@@ -23,7 +26,7 @@ export function ReadoutsPanel() {
         <div className={live.stale ? "opacity-55" : undefined} aria-busy={live.stale && !live.fault ? true : undefined}>
           {live.stale ? <p className="mb-1 text-xs font-medium text-amber-900">Figures out of date</p> : null}
           {zeroLockNote(a, unit) ? <p className="mb-2 rounded bg-amber-50 p-2 text-xs text-amber-950">{zeroLockNote(a, unit)}</p> : null}
-          {readoutGroups(a, unit).map((g) => (
+          {(targets ? judgeReadoutGroups(readoutGroups(a, unit), a, targets) : readoutGroups(a, unit)).map((g) => (
             <section key={g.id} aria-label={g.title} className="mb-2">
               <h3 className="mb-1 text-xs font-semibold uppercase tracking-wide text-ink/80">{g.title}</h3>
               <dl className="grid grid-cols-2 gap-1.5">

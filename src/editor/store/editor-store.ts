@@ -21,6 +21,8 @@ export interface KitRef {
   readonly version: number;
   readonly updatedByName: string | null;
   readonly updatedAt: string;
+  /** The number of the kit's latest revision (each save makes the next). */
+  readonly headRevision?: number;
 }
 
 /** What is wrong with the layout being shown: a field out of its range or a part that cannot work. */
@@ -92,6 +94,8 @@ export interface EditorState {
   readonly settings: EditorSettings;
   readonly live: LiveAnalysis;
   readonly save: SaveState;
+  /** The note the next save's revision carries (optional; cleared once saved). */
+  readonly note: string;
 
   /** Writes the document (one undo step; `coalesce` merges repeats of the same edit within a second). */
   commit(next: Layout, options?: { coalesce?: string }): void;
@@ -101,6 +105,7 @@ export interface EditorState {
   setSettings(settings: Partial<Omit<EditorSettings, "show">> & { show?: Partial<ShowOptions> }): void;
   setLive(live: Partial<Omit<LiveAnalysis, "seq">>): void;
   setSave(save: SaveState): void;
+  setNote(note: string): void;
   /** After a successful save: the kit's new version, and this layout as the saved one. */
   markSaved(kit: Partial<KitRef> & { version: number }, layout: Layout): void;
   /** Takes the server's copy (someone else's save): an undoable step, so my version stays reachable. */
@@ -143,6 +148,7 @@ export function createEditorStore(init: EditorInit): EditorStore {
         },
         live: { analysis: init.analysis, quality: "full", stale: init.analysis === null, fault: init.fault ?? null, tradeoff: init.tradeoff ?? null, seq: 0 },
         save: { status: "idle" },
+        note: "",
 
         commit(next, options) {
           if (get().readOnly || next === get().layout) {
@@ -183,8 +189,11 @@ export function createEditorStore(init: EditorInit): EditorStore {
         setSave(save) {
           set({ save });
         },
+        setNote(note) {
+          set({ note });
+        },
         markSaved(kit, layout) {
-          set({ kit: { ...get().kit, ...kit }, savedJson: JSON.stringify(layout), save: { status: "saved", at: new Date().toISOString() } });
+          set({ kit: { ...get().kit, ...kit }, savedJson: JSON.stringify(layout), save: { status: "saved", at: new Date().toISOString() }, note: "" });
         },
         takeServerCopy(kit, layout) {
           lastCoalesce = null;

@@ -47,6 +47,8 @@ export function EditorToolbar({ onSave }: { onSave: () => void }) {
   const { canUndo, canRedo } = useHistoryDepth();
   const gridId = useId();
   const unitId = useId();
+  const noteId = useId();
+  const note = useEditor((s) => s.note);
   const unit = settings.lengthUnit;
 
   const setUnit = (next: LengthUnit) => {
@@ -60,7 +62,7 @@ export function EditorToolbar({ onSave }: { onSave: () => void }) {
       <div className="mr-auto min-w-0">
         <h1 className="truncate text-base font-semibold leading-tight">{kit.name}</h1>
         <div className="flex items-center gap-2 text-xs text-ink-muted">
-          <span>{kit.scale} · version {kit.version}</span>
+          <span data-testid="kit-revision">{kit.scale} · {kit.headRevision ? `revision ${kit.headRevision}` : `version ${kit.version}`}</span>
           {readOnly ? <span data-testid="read-only-badge" className="rounded bg-ink/10 px-1.5 py-0.5 font-medium text-ink">Read only</span> : <SaveStatus />}
         </div>
       </div>
@@ -97,6 +99,26 @@ export function EditorToolbar({ onSave }: { onSave: () => void }) {
           ))}
         </fieldset>
       </details>
+      {readOnly ? null : (
+        <div className="flex items-center">
+          <label htmlFor={noteId} className="sr-only">Note for the revision this save makes (optional)</label>
+          <input
+            id={noteId}
+            data-testid="revision-note"
+            value={note}
+            maxLength={500}
+            placeholder="Note for this revision (optional)"
+            onChange={(e) => store.getState().setNote(e.target.value)}
+            onKeyDown={(e) => {
+              if (e.key === "Enter" && dirty && !faulty) {
+                e.preventDefault();
+                onSave();
+              }
+            }}
+            className="w-56 rounded-md border border-ink/20 bg-white px-2 py-1 text-xs placeholder:text-ink-muted"
+          />
+        </div>
+      )}
       {readOnly ? null : (
         <Button
           data-testid="save-layout"

@@ -109,6 +109,8 @@ export async function chooseActiveWorkspace(headers: Headers, signed: Signed, wo
   forgetCachedSession(headers);
 }
 
+const RESOURCE_WORDS: Partial<Record<Resource, string>> = { organization: "the workspace", shelf: "the shelf", target: "the workspace's targets" };
+
 const WORKSPACE_ID = /^[A-Za-z0-9_-]{1,64}$/;
 const notAMember = () => new HttpError(403, "not_a_member", "You are not a member of this workspace.");
 
@@ -133,7 +135,7 @@ export async function requireWorkspaceAccess<R extends Resource>(
     .limit(1);
   if (!row) throw notAMember();
   if (!roleCan(row.role, resource, action)) {
-    throw forbidden(`A ${row.role} of this workspace may not ${action} ${resource === "organization" ? "the workspace" : `${resource}s`}.`);
+    throw forbidden(`${/^[aeiou]/i.test(row.role) ? "An" : "A"} ${row.role} of this workspace may not ${action} ${RESOURCE_WORDS[resource] ?? `${resource}s`}.`);
   }
   return { ...signed, workspace: { id: row.id, name: row.name, slug: row.slug }, role: row.role };
 }

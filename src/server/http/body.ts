@@ -1,6 +1,6 @@
 import type { z } from "zod";
 import { env } from "../env";
-import { HttpError, invalid } from "./errors";
+import { fieldIssues, HttpError, invalid } from "./errors";
 
 /** Reads at most `limit` bytes of the body, so a huge upload is refused without buffering it. */
 async function readTextCapped(req: Request, limit: number): Promise<string> {
@@ -87,5 +87,17 @@ export async function readJson<S extends z.ZodType>(req: Request, schema: S, lim
   }
   const parsed = schema.safeParse(data);
   if (!parsed.success) throw invalid(parsed.error);
+  return parsed.data;
+}
+
+/** Parses the query string against a schema (first value of each parameter): 422 naming each parameter. */
+export function readQuery<S extends z.ZodType>(req: Request, schema: S): z.infer<S> {
+  const input: Record<string, string> = {};
+  for (const [k, v] of new URL(req.url).searchParams) if (!(k in input)) input[k] = v;
+  const parsed = schema.safeParse(input);
+  if (!parsed.success) {
+    const fields = fieldIssues(parsed.error).map((f) => (f.path === "(body)" ? { ...f, path: "(query)" } : f));
+    throw new HttpError(422, "invalid", `Invalid query: ${fields[0]!.path}: ${fields[0]!.message}`, fields);
+  }
   return parsed.data;
 }

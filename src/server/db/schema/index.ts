@@ -1,3 +1,4 @@
 export * from "./auth";
 export * from "./kits";
+export * from "./library";
 export * from "./preferences";

@@ -1,8 +1,10 @@
 import type { Metadata } from "next";
+import { Suspense } from "react";
+import { Spinner } from "@/components/ui/button";
 import { roleCan } from "@/contracts/roles";
 import { listMyInvitations } from "@/server/data/invitations";
 import { pageWorkspace } from "@/server/data/page-access";
-import { KitsPanel } from "./_components/kits-panel";
+import { LibraryPanel } from "./_components/library-panel";
 import { MyInvitations } from "./_components/my-invitations";
 
 export const metadata: Metadata = { title: "Kits" };
@@ -14,11 +16,10 @@ export default async function KitsPage({ params }: { params: Promise<{ workspace
     <>
       {/* Where everyone lands after signing in (/kits opens it), so an invitation is seen there. */}
       <MyInvitations initial={await listMyInvitations(access.user)} />
-      <KitsPanel
-        workspaceId={access.workspace.id}
-        workspaceName={access.workspace.name}
-        canWrite={roleCan(access.role, "kit", "create")}
-      />
+      {/* The view is read from the URL's query in the browser. */}
+      <Suspense fallback={<Spinner label="Loading kits…" />}>
+        <LibraryPanel workspaceId={access.workspace.id} workspaceName={access.workspace.name} canWrite={roleCan(access.role, "kit", "create")} />
+      </Suspense>
     </>
   );
 }

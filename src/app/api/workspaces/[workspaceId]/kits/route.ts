@@ -1,14 +1,16 @@
 import { z } from "zod";
 import { kitCreateFields } from "@/contracts/kits";
-import { createKit, listKits } from "@/server/data/kits";
+import { libraryQuerySchema } from "@/contracts/library";
+import { createKit, queryLibrary } from "@/server/data/kits";
 import { incomingLayout, requireValidLayout, starterLayout } from "@/server/data/layouts";
-import { readJson } from "@/server/http/body";
+import { readJson, readQuery } from "@/server/http/body";
 import { workspaceRoute } from "@/server/http/route";
 
 type Params = { workspaceId: string };
 
-export const GET = workspaceRoute<Params, "kit">("kit", "read", async (_req, access) => {
-  return Response.json({ kits: await listKits(access.workspace.id) });
+// The library: one page of kits, filtered, searched and sorted on the server (see contracts/library.ts).
+export const GET = workspaceRoute<Params, "kit">("kit", "read", async (req, access) => {
+  return Response.json(await queryLibrary(access.workspace.id, readQuery(req, libraryQuerySchema)));
 });
 
 const createBody = kitCreateFields.extend({ layout: incomingLayout.optional() }).strict();

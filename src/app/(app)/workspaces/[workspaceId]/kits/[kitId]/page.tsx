@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { ErrorNotice } from "@/components/ui/notice";
+import { revisionNumberParam } from "@/contracts/revisions";
 import { loadKitEditor } from "@/server/data/kit-editor";
 import { pageWorkspace } from "@/server/data/page-access";
 import { HttpError } from "@/server/http/errors";
@@ -9,10 +10,16 @@ import { KitEditor } from "./_components/kit-editor";
 
 export const metadata: Metadata = { title: "Kit editor" };
 
-export default async function KitPage({ params }: { params: Promise<{ workspaceId: string; kitId: string }> }) {
+type Search = Promise<Record<string, string | string[] | undefined>>;
+
+export default async function KitPage({ params, searchParams }: { params: Promise<{ workspaceId: string; kitId: string }>; searchParams: Search }) {
   const { workspaceId, kitId } = await params;
-  const access = await pageWorkspace(workspaceId, "kit", "read", `/workspaces/${workspaceId}/kits/${kitId}`);
-  const data = await loadKitEditor(access, kitId).catch((error: unknown) => {
+  const rawRevision = (await searchParams).revision;
+  // ?revision=n shows that revision read-only; anything that is not a revision number is not there.
+  const revision = typeof rawRevision === "string" ? revisionNumberParam.safeParse(rawRevision) : null;
+  if (revision && (!revision.success || String(revision.data) !== rawRevision)) notFound();
+  const access = await pageWorkspace(workspaceId, "kit", "read", `/workspaces/${workspaceId}/kits/${kitId}${revision ? `?revision=${revision.data}` : ""}`);
+  const data = await loadKitEditor(access, kitId, revision?.data ?? null).catch((error: unknown) => {
     if (error instanceof HttpError && error.status === 404) notFound();
     throw error;
   });
@@ -25,23 +32,32 @@ export default async function KitPage({ params }: { params: Promise<{ workspaceI
       </div>
     );
   }
+  const k = data.kit;
   return (
     <KitEditor
+      // A new store for each revision shown: the editor's history and document belong to one of them.
+      key={`${k.id}@${data.library.viewing?.revision ?? "latest"}`}
       init={{
         kit: {
           workspaceId: access.workspace.id,
-          kitId: data.kit.id,
-          name: data.kit.name,
-          scale: data.kit.scale,
-          notes: data.kit.notes,
-          version: data.kit.version,
-          updatedByName: data.kit.updatedByName,
-          updatedAt: data.kit.updatedAt,
+          kitId: k.id,
+          name: k.name,
+          scale: k.scale,
+          notes: k.notes,
+          version: k.version,
+          updatedByName: k.updatedByName,
+          updatedAt: k.updatedAt,
+          headRevision: k.headRevision,
         },
         layout: data.layout,
         readOnly: data.readOnly,
         lengthUnit: data.lengthUnit,
         analysis: data.analysis,
+      }}
+      library={{
+        ...data.library,
+        tags: k.tags,
+        origin: k.originRevision !== null ? { kitId: k.originKitId, kitName: k.originKitName, revision: k.originRevision } : null,
       }}
     />
   );

@@ -9,7 +9,7 @@ import { KIT_SCALES, kitCreateFields, type KitCreateFields, type KitDetail } fro
 import { api, ApiError } from "@/lib/api-client";
 import { queryKeys } from "@/lib/query-keys";
 
-export function CreateKitForm({ workspaceId }: { workspaceId: string }) {
+export function CreateKitForm({ workspaceId, onCreated }: { workspaceId: string; onCreated?: (kit: KitDetail) => void }) {
   const queryClient = useQueryClient();
   const { register, handleSubmit, formState, reset, setError } = useForm<KitCreateFields>({
     resolver: zodResolver(kitCreateFields),
@@ -17,8 +17,9 @@ export function CreateKitForm({ workspaceId }: { workspaceId: string }) {
   });
   const create = useMutation({
     mutationFn: (values: KitCreateFields) => api<{ kit: KitDetail }>(`/api/workspaces/${workspaceId}/kits`, { method: "POST", body: values }),
-    onSuccess: () => {
+    onSuccess: ({ kit }) => {
       reset();
+      onCreated?.(kit);
       return queryClient.invalidateQueries({ queryKey: queryKeys.kits(workspaceId) });
     },
     onError: (error) => {
@@ -29,7 +30,6 @@ export function CreateKitForm({ workspaceId }: { workspaceId: string }) {
 
   return (
     <form onSubmit={handleSubmit((v) => create.mutate(v))} noValidate className="flex flex-col gap-3" aria-label="New kit">
-      <h2 className="font-semibold">New kit</h2>
       {create.isError && !(create.error instanceof ApiError && create.error.fields.length) ? (
         <ErrorNotice title="Could not create the kit" message={create.error.message} />
       ) : null}

@@ -1,8 +1,14 @@
 "use client";
-// The kit's page: the editor, with the full analysis sheet as one of its side tabs (fed by the live
-// figures, so it follows every edit).
+// The kit's page: the editor, with the full analysis sheet, the history, the kit's details and targets and
+// the shelf as side tabs (fed by the live figures, so they follow every edit). An earlier revision opens
+// read-only under a banner that says so.
 import type { EditorInit } from "@/editor/store/editor-store";
 import { EditorProvider, useEditor } from "@/editor/store/editor-context";
+import { HistoryPanel } from "@/editor/library/history-panel";
+import { KitDetailsPanel } from "@/editor/library/kit-details-panel";
+import { KitLibraryProvider, type KitLibraryInit } from "@/editor/library/library-context";
+import { RevisionBanner } from "@/editor/library/revision-banner";
+import { ShelfTab } from "@/editor/library/shelf-tab";
 import { EditorWorkbench } from "@/editor/workbench/editor-workbench";
 import { AnalysisSheet } from "./analysis-sheet";
 
@@ -12,10 +18,22 @@ function LiveSheet() {
   return <AnalysisSheet analysis={analysis} stale={stale} />;
 }
 
-export function KitEditor({ init }: { init: EditorInit }) {
+const SIDE_TABS = [
+  { id: "sheet", label: "Sheet", content: () => <LiveSheet /> },
+  { id: "history", label: "History", content: () => <HistoryPanel /> },
+  { id: "kit", label: "Kit & targets", content: () => <KitDetailsPanel /> },
+  { id: "shelf", label: "Shelf", content: () => <ShelfTab /> },
+];
+
+export function KitEditor({ init, library }: { init: EditorInit; library: KitLibraryInit }) {
   return (
     <EditorProvider init={init}>
-      <EditorWorkbench sideTabs={[{ id: "sheet", label: "Sheet", content: () => <LiveSheet /> }]} />
+      <KitLibraryProvider init={library}>
+        <div className="flex min-h-0 flex-1 flex-col">
+          <RevisionBanner />
+          <EditorWorkbench sideTabs={SIDE_TABS} />
+        </div>
+      </KitLibraryProvider>
     </EditorProvider>
   );
 }
