@@ -3,8 +3,8 @@ import { TARNWICK_10_BASE } from "@/contracts/demo-layouts";
 import { layoutFieldsSchema } from "@/contracts/layout";
 import { moveHandle, nudgeHandle, setNeckDiameter } from "@/editor/commands/edit-commands";
 import { handleById, handlePlanePoint, HANDLES } from "@/editor/document/handles";
-import { ALL_FIELDS, fieldRange } from "@/editor/document/layout-fields";
-import { getAt, setAt } from "@/editor/document/layout-paths";
+import { ALL_FIELDS, fieldRange } from "@/figures/layout-fields";
+import { getAt, setAt } from "@/figures/layout-paths";
 
 describe("layout paths", () => {
   it("reads and writes a nested field without touching the rest", () => {

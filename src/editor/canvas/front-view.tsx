@@ -4,11 +4,11 @@ import { useDeferredValue, useMemo } from "react";
 // drive shaft between its joints; the instant and roll centres as construction.
 import { handlesOf } from "../document/handles";
 import { useEditor } from "../store/editor-context";
-import { formatLength } from "../units/length-unit";
-import { frontBox, frontDrawing } from "./corner-drawing";
-import { CLEARANCE_COLOUR, INK } from "./drawing-colours";
+import { formatLength } from "@/figures/length-unit";
+import { frontBox, frontDrawing } from "@/drawing/corner-drawing";
+import { CLEARANCE_COLOUR, INK } from "@/drawing/drawing-colours";
 import { PlaneBand, PlaneDimension, PlaneDot, PlaneLabel, PlaneLine } from "./plane-shapes";
-import { previewBinding } from "./preview-state";
+import { previewBinding } from "@/drawing/preview-state";
 import { useShownPose } from "./use-shown-pose";
 import { ViewFrame } from "./view-frame";
 import { BindingNote, FaultNote, StaticGhost, faultColour } from "./view-notes";

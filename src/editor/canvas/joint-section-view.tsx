@@ -2,13 +2,13 @@
 // The joint section: the neck in its cup at the articulation of the previewed pose (the wheel whose
 // joint bends more), coloured by clearance, with the contact point and the gap figured on the drawing.
 import { useDeferredValue, useMemo } from "react";
-import { fmt, limitLabel } from "@/lib/format";
+import { fmt, limitLabel } from "@/figures/format";
 import { useEditor } from "../store/editor-context";
-import { formatLength } from "../units/length-unit";
-import { CLEARANCE_COLOUR, CLEARANCE_LABEL, INK } from "./drawing-colours";
-import { jointSection } from "./joint-section-geometry";
+import { formatLength } from "@/figures/length-unit";
+import { CLEARANCE_COLOUR, CLEARANCE_LABEL, INK } from "@/drawing/drawing-colours";
+import { jointSection } from "@/drawing/joint-section-geometry";
 import { PlaneDimension, PlaneDot, PlaneLabel, PlaneLine } from "./plane-shapes";
-import { worseWheel } from "./preview-state";
+import { worseWheel } from "@/drawing/preview-state";
 import { useShownPose } from "./use-shown-pose";
 import { ViewFrame } from "./view-frame";
 

@@ -2,8 +2,8 @@
 // Konva shapes placed by plane coordinates (mm): each maps its points through the view's transform.
 // Everything here is static drawing: listening is off (hit testing is the view frame's job).
 import { Circle, Line, Shape, Text } from "react-konva";
-import { CANVAS_FONT, INK } from "./drawing-colours";
-import { gridSpacingMm, planeToScreen, screenToPlane, type PlanePoint, type ViewTransform } from "./view-transform";
+import { CANVAS_FONT, INK } from "@/drawing/drawing-colours";
+import { gridSpacingMm, planeToScreen, screenToPlane, type PlanePoint, type ViewTransform } from "@/drawing/view-transform";
 
 type Stroke = { stroke?: string; width?: number; dash?: number[]; fill?: string; opacity?: number };
 

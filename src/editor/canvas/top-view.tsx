@@ -3,18 +3,18 @@
 // is down the screen): both front wheels at the previewed steer, steering arms, tie rods and the rack,
 // the shafts, and the turning construction (the wheel axes, where they meet, and the rear axle line).
 import { useDeferredValue, useMemo } from "react";
-import { fmt } from "@/lib/format";
+import { fmt } from "@/figures/format";
 import { handlesOf } from "../document/handles";
 import { useEditor } from "../store/editor-context";
-import { formatLength } from "../units/length-unit";
-import { topBox, topDrawing, type TopWheelDrawing } from "./corner-drawing";
-import { CLEARANCE_COLOUR, INK } from "./drawing-colours";
+import { formatLength } from "@/figures/length-unit";
+import { topBox, topDrawing, type TopWheelDrawing } from "@/drawing/corner-drawing";
+import { CLEARANCE_COLOUR, INK } from "@/drawing/drawing-colours";
 import { PlaneBand, PlaneDimension, PlaneDot, PlaneLabel, PlaneLine } from "./plane-shapes";
-import { previewBinding } from "./preview-state";
+import { previewBinding } from "@/drawing/preview-state";
 import { useShownPose } from "./use-shown-pose";
 import { ViewFrame } from "./view-frame";
 import { BindingNote, FaultNote, StaticGhost, faultColour } from "./view-notes";
-import type { ViewTransform } from "./view-transform";
+import type { ViewTransform } from "@/drawing/view-transform";
 import type { PartId } from "../document/handles";
 
 const HANDLES = handlesOf("top");

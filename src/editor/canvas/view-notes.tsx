@@ -2,13 +2,13 @@
 // What the views say over the drawing: the fault (the part to blame, in red), what binds at the previewed
 // steer and travel, and the layout at ride height shown faintly while previewing elsewhere.
 import type { Layout } from "@/contracts/layout";
-import { limitLabel, fmt } from "@/lib/format";
+import { limitLabel, fmt } from "@/figures/format";
 import type { PartId } from "../document/handles";
-import { frontOf, topOf } from "./corner-drawing";
-import { INK } from "./drawing-colours";
+import { frontOf, topOf } from "@/drawing/corner-drawing";
+import { INK } from "@/drawing/drawing-colours";
 import { PlaneLine } from "./plane-shapes";
-import type { PreviewBinding } from "./preview-state";
-import type { ViewTransform } from "./view-transform";
+import type { PreviewBinding } from "@/drawing/preview-state";
+import type { ViewTransform } from "@/drawing/view-transform";
 
 /** The part's colour, or the fault colour when the fault is on this part. */
 export function faultColour(faultPart: PartId | null, part: PartId, normal: string): string {

@@ -2,7 +2,7 @@
 // The live figures: rendered with the page from the server's analysis, then replaced by the worker's as
 // the designer edits. When the layout is impossible the last valid figures stay, marked out of date.
 import { useEditor } from "../store/editor-context";
-import { readoutGroups, zeroLockNote } from "./readout-figures";
+import { readoutGroups, zeroLockNote } from "@/figures/readout-figures";
 
 export function ReadoutsPanel() {
   const live = useEditor((s) => s.live);

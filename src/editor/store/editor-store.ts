@@ -10,7 +10,7 @@ import type { Layout } from "@/contracts/layout";
 import type { AnalysisResult, NeckTradeoff } from "@/engine";
 import type { PartId } from "../document/handles";
 import { DEFAULT_GRID_STEP_MM } from "../tools/snapping";
-import type { LengthUnit } from "../units/length-unit";
+import type { LengthUnit } from "@/figures/length-unit";
 
 export interface KitRef {
   readonly workspaceId: string;

@@ -7,7 +7,7 @@ import { api } from "@/lib/api-client";
 import { selectDirty, selectFaulty, redo, undo, type ShowOptions } from "../store/editor-store";
 import { useEditor, useEditorStore, useHistoryDepth } from "../store/editor-context";
 import { GRID_STEPS_MM } from "../tools/snapping";
-import { formatLength, isLengthUnit, type LengthUnit } from "../units/length-unit";
+import { formatLength, isLengthUnit, type LengthUnit } from "@/figures/length-unit";
 
 // How tooltips name the shortcuts' modifier: one text for every platform, so server and browser render alike.
 const SHORTCUT_MOD = "Ctrl/⌘";

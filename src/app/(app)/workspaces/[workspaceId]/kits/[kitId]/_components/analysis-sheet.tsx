@@ -1,6 +1,6 @@
 "use client";
 import type { AnalysisResult } from "@/engine";
-import { fmt, limitLabel, signed } from "@/lib/format";
+import { fmt, limitLabel, signed } from "@/figures/format";
 import { JointAngleChart, SteerLockChart, TravelChart } from "./kit-charts";
 
 function Figure({ label, value, hint, tone }: { label: string; value: string; hint?: string; tone?: "good" | "bad" }) {
