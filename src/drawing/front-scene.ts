@@ -88,13 +88,14 @@ export function frontScene(input: FrontSceneInput): Scene {
       if (input.detail === "sheet") {
         const shaftMm = Math.hypot(d.shaft[1][0] - d.shaft[0][0], d.shaft[1][1] - d.shaft[0][1]);
         items.push(
-          { type: "dimension", layer: "dimensions", part: "shaft-length", from: d.shaft[0], to: d.shaft[1], text: `shaft ${formatLength(shaftMm, unit, 1)}`, offsetPx: -10, colour: INK.label },
-          pivotLabel(d.lowerArm[0], unit, "lower-inner-coordinates", -30, 6),
-          pivotLabel(d.lowerArm[1], unit, "lower-outer-coordinates", 6, 8),
-          pivotLabel(d.upperArm[0], unit, "upper-inner-coordinates", -30, -22),
-          pivotLabel(d.upperArm[1], unit, "upper-outer-coordinates", -10, -24),
+          { type: "dimension", layer: "dimensions", part: "shaft-length", from: d.shaft[0], to: d.shaft[1], text: `shaft ${formatLength(shaftMm, unit, 1)}`, offsetPx: -8, offsetMm: -layout.drive.neckDiameterMm / 2, colour: INK.label },
+          // Inner points labelled to their left, outer ones to their right, clear of the arms.
+          pivotLabel(d.lowerArm[0], unit, "lower-inner-coordinates", -64, -5),
+          pivotLabel(d.lowerArm[1], unit, "lower-outer-coordinates", 6, 4),
+          pivotLabel(d.upperArm[0], unit, "upper-inner-coordinates", -64, -5),
+          pivotLabel(d.upperArm[1], unit, "upper-outer-coordinates", -20, -22),
           pivotLabel(d.wheelCentre, unit, "wheel-centre-coordinates", 8, -4),
-          pivotLabel(d.shaft[0], unit, "inboard-joint-coordinates", -10, 8),
+          pivotLabel(d.shaft[0], unit, "inboard-joint-coordinates", -64, -5),
         );
       }
     }

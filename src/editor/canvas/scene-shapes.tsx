@@ -1,32 +1,42 @@
 "use client";
-// A scene (src/drawing) on the Konva canvas: each item through the plane shape that draws it. Lines across
-// the view run from the canvas's left edge to its right, and labels pinned to the start sit at its left edge.
-import type { Scene, SceneItem } from "@/drawing/scene";
+// A scene (src/drawing) on the Konva canvas: the marks src/drawing/screen-scene.ts resolves, the same ones
+// the SVG and PDF exports draw. Static drawing: nothing here listens (hit testing is the view frame's job).
+import { Circle, Line, Text } from "react-konva";
+import type { Scene } from "@/drawing/scene";
+import { sceneMarks, type ScreenMark } from "@/drawing/screen-scene";
 import type { ViewTransform } from "@/drawing/view-transform";
-import { PlaneBand, PlaneDimension, PlaneDot, PlaneLabel, PlaneLine } from "./plane-shapes";
+import { CANVAS_FONT } from "@/drawing/drawing-colours";
 
-function SceneShape({ item, t, width }: { item: SceneItem; t: ViewTransform; width: number }) {
-  const u0 = -t.ox / t.scale;
-  switch (item.type) {
-    case "path":
-      return <PlaneLine t={t} points={item.points} closed={item.closed} stroke={item.stroke} width={item.widthPx} dash={item.dashPx ? [...item.dashPx] : undefined} fill={item.fill} opacity={item.opacity} />;
-    case "band":
-      return <PlaneBand t={t} from={item.from} to={item.to} widthMm={item.widthMm} colour={item.colour} opacity={item.opacity} />;
-    case "dot":
-      return <PlaneDot t={t} at={item.at} radiusPx={Math.max(item.radiusPx, (item.radiusMm ?? 0) * t.scale)} fill={item.fill} stroke={item.stroke} width={item.widthPx} />;
-    case "label":
-      return <PlaneLabel t={t} at={item.pinStart ? [u0, item.at[1]] : item.at} text={item.text} colour={item.colour} dx={item.dxPx} dy={item.dyPx} size={item.sizePx} bold={item.bold} />;
-    case "dimension":
-      return <PlaneDimension t={t} from={item.from} to={item.to} text={item.text} offsetPx={item.offsetPx + (item.offsetMm ?? 0) * t.scale} colour={item.colour} />;
-    case "rule":
-      return <PlaneLine t={t} points={[[u0, item.v], [(width - t.ox) / t.scale, item.v]]} stroke={item.stroke} width={item.widthPx} dash={item.dashPx ? [...item.dashPx] : undefined} />;
+function MarkShape({ mark }: { mark: ScreenMark }) {
+  switch (mark.kind) {
+    case "stroke":
+      return (
+        <Line
+          listening={false}
+          points={mark.points.flatMap((p) => [p[0], p[1]])}
+          closed={mark.closed}
+          stroke={mark.colour}
+          strokeWidth={mark.width}
+          dash={mark.dash ? [...mark.dash] : undefined}
+          fill={mark.fill}
+          opacity={mark.opacity}
+          lineCap={mark.round ? "round" : "butt"}
+          lineJoin={mark.round ? "round" : "miter"}
+          perfectDrawEnabled={false}
+          shadowForStrokeEnabled={false}
+        />
+      );
+    case "circle":
+      return <Circle listening={false} x={mark.at[0]} y={mark.at[1]} radius={mark.radius} fill={mark.fill} stroke={mark.stroke} strokeWidth={mark.width} perfectDrawEnabled={false} />;
+    case "text":
+      return <Text listening={false} x={mark.at[0]} y={mark.at[1]} text={mark.text} fontSize={mark.size} fontFamily={CANVAS_FONT} fontStyle={mark.bold ? "bold" : "normal"} fill={mark.colour} perfectDrawEnabled={false} />;
   }
 }
 
 export function SceneShapes({ scene, t, width }: { scene: Scene; t: ViewTransform; width: number }) {
   return (
     <>
-      {scene.items.map((item, i) => <SceneShape key={`${item.part}:${i}`} item={item} t={t} width={width} />)}
+      {sceneMarks(scene, t, { left: 0, width }).map((mark, i) => <MarkShape key={`${mark.part}:${i}`} mark={mark} />)}
     </>
   );
 }

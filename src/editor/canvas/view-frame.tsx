@@ -13,7 +13,7 @@ import { createHandleDragTool, type PointerInput } from "../tools/handle-drag-to
 import { nudgeDelta } from "../tools/snapping";
 import { formatLength } from "@/figures/length-unit";
 import { INK } from "@/drawing/drawing-colours";
-import { GridShape } from "./plane-shapes";
+import { GridShape } from "./grid-shape";
 import { useElementSize } from "./use-element-size";
 import { fitBox, panBy, planeToScreen, scaleBarMm, screenToPlane, zoomAt, type PlaneBox, type ScreenPoint, type ViewTransform } from "@/drawing/view-transform";
 
