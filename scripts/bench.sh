@@ -1,8 +1,9 @@
 #!/usr/bin/env bash
 # `npm run bench`: performance checks.
 #  1. the engine benchmark (scripts/bench-engine.ts), in-process, no services;
-#  2. the HTTP benchmark (scripts/bench-http.ts) and
-#  3. the browser benchmark (scripts/bench-browser.ts: the editor drag, the kit page), both against one
+#  2. the HTTP benchmark (scripts/bench-http.ts),
+#  3. the export benchmark (scripts/bench-exports.ts: the demo kit's sheet and a 121 × 121 envelope CSV) and
+#  4. the browser benchmark (scripts/bench-browser.ts: the editor drag, the kit page), all against one
 #     production server on 127.0.0.1:3200 with its own throwaway database (.data/pg-bench on 54349),
 #     stopped afterwards.
 set -euo pipefail
@@ -28,7 +29,7 @@ else
 fi
 
 # --- HTTP and browser benchmarks ------------------------------------------------------------------
-# Both read BENCH_BASE_URL (the server below); DATABASE_URL is its own database, migrated (each
+# They read BENCH_BASE_URL (the server below); DATABASE_URL is its own database, migrated (each
 # benchmark makes the accounts and kits it needs through the API).
 APP_PORT=$(kb_free_port 3200) || kb_die "no free port for the bench app (3200-3220)"
 PG_PORT=$(kb_free_port 54349) || kb_die "no free port for the bench PostgreSQL (54349-54369)"
@@ -40,5 +41,7 @@ kb_next_build || kb_die "the build failed"
 kb_app_start "$APP_PORT" .data/app-bench.log || kb_die "the app did not start (log: .data/app-bench.log)"
 kb_say "HTTP benchmark against $BENCH_BASE_URL"
 npx --no-install tsx scripts/bench-http.ts
+kb_say "export benchmark against $BENCH_BASE_URL"
+npx --no-install tsx scripts/bench-exports.ts
 kb_say "browser benchmark against $BENCH_BASE_URL"
 npx --no-install tsx scripts/bench-browser.ts

@@ -1,12 +1,12 @@
 // The kit exports through their route, against the real database: the dimension sheet read back with
 // poppler's pdftotext (page 1 also rendered with pdftoppm, left in .data/exports-test/), the DXF parsed with
-// dxf-parser, the CSVs with csv-parse, the SVGs with jsdom's XML parser; who may export, and what is refused.
+// dxf-parser, the CSVs with csv-parse, the SVGs with @xmldom/xmldom; who may export, and what is refused.
 import { execFileSync } from "node:child_process";
 import { existsSync, mkdirSync, statSync, writeFileSync } from "node:fs";
 import path from "node:path";
 import { parse as parseCsv } from "csv-parse/sync";
 import DxfParser from "dxf-parser";
-import { JSDOM } from "jsdom";
+import { DOMParser, type Document as XmlDocument, type Element as XmlElement } from "@xmldom/xmldom";
 import { beforeAll, describe, expect, it } from "vitest";
 import * as exportRoute from "@/app/api/workspaces/[workspaceId]/kits/[kitId]/exports/[file]/route";
 import * as kitsRoute from "@/app/api/workspaces/[workspaceId]/kits/route";
@@ -227,41 +227,46 @@ describe("the sweeps (CSV)", () => {
 });
 
 describe("the views (SVG)", () => {
-  const svgOf = (text: string) => new JSDOM(text, { contentType: "image/svg+xml" }).window.document;
+  const svgOf = (text: string) => new DOMParser().parseFromString(text, "image/svg+xml");
+  /** Every element of the document, in order. */
+  const elements = (doc: XmlDocument): XmlElement[] => [...doc.getElementsByTagName("*")];
+  const part = (doc: XmlDocument, name: string) => elements(doc).find((e) => e.getAttribute("data-part") === name);
 
   it("front view: the arms, knuckle, tyre, shaft and construction, the lower arm drawn to its length", async () => {
     const res = await get("front.svg");
     expect(res.status).toBe(200);
     expect(res.headers.get("content-type")).toBe("image/svg+xml; charset=utf-8");
     const doc = svgOf(res.text);
-    const svg = doc.documentElement;
+    const svg = doc.documentElement!;
     expect(svg.tagName).toBe("svg");
+    expect(svg.namespaceURI).toBe("http://www.w3.org/2000/svg");
     expect(svg.getAttribute("viewBox")).toBe("0 0 800 560");
-    for (const part of ["lower-arm", "upper-arm", "knuckle", "tyre", "shaft", "kingpin-axis", "instant-centre", "roll-centre", "lower-arm-length", "scrub-radius"]) {
-      expect(doc.querySelector(`[data-part="${part}"]`), part).not.toBeNull();
+    for (const name of ["lower-arm", "upper-arm", "knuckle", "tyre", "shaft", "kingpin-axis", "instant-centre", "roll-centre", "lower-arm-length", "scrub-radius"]) {
+      expect(part(doc, name), name).toBeDefined();
     }
-    const lower = doc.querySelector('polyline[data-part="lower-arm"]')!;
+    const lower = part(doc, "lower-arm")!;
+    expect(lower.tagName).toBe("polyline");
     expect(lower.getAttribute("class")).toBe("arms");
-    const [p, q] = lower.getAttribute("points")!.split(" ").map((s) => s.split(",").map(Number));
+    const [p, q] = lower.getAttribute("points")!.split(" ").map((xy: string) => xy.split(",").map(Number));
     const pxPerMm = Number(svg.getAttribute("data-px-per-mm"));
     const f = TARNWICK_10_BASE.frontView;
     const lengthMm = Math.hypot(f.lowerOuter.y - f.lowerInner.y, f.lowerOuter.z - f.lowerInner.z);
     expect(Math.hypot(q![0]! - p![0]!, q![1]! - p![1]!) / pxPerMm).toBeCloseTo(lengthMm, 1);
-    const texts = [...doc.querySelectorAll("text")].map((t) => t.textContent);
+    const texts = [...doc.getElementsByTagName("text")].map((t) => t.textContent);
     expect(texts).toContain("80.0 mm");
     expect(texts.some((t) => t?.startsWith("RC "))).toBe(true);
   });
 
   it("top view and joint section have their parts", async () => {
     const top = svgOf((await get("top.svg")).text);
-    for (const part of ["left-tyre", "right-tyre", "left-steering-arm", "left-tie-rod", "rack", "caster-trail", "steering-arm-length"]) {
-      expect(top.querySelector(`[data-part="${part}"]`), part).not.toBeNull();
+    for (const name of ["left-tyre", "right-tyre", "left-steering-arm", "left-tie-rod", "rack", "caster-trail", "steering-arm-length"]) {
+      expect(part(top, name), name).toBeDefined();
     }
     const joint = svgOf((await get("joint.svg", "?unit=in")).text);
-    for (const part of ["cup-wall-1", "neck", "joint-pivot", "gap-label", "cup-mouth", "pivot-depth"]) {
-      expect(joint.querySelector(`[data-part="${part}"]`), part).not.toBeNull();
+    for (const name of ["cup-wall-1", "neck", "joint-pivot", "gap-label", "cup-mouth", "pivot-depth"]) {
+      expect(part(joint, name), name).toBeDefined();
     }
-    expect(joint.querySelector('[data-part="gap-label"]')!.textContent).toMatch(/^gap -?\d\.\d{4} in$/);
+    expect(part(joint, "gap-label")!.textContent).toMatch(/^gap -?\d\.\d{4} in$/);
   });
 });
 

@@ -1,9 +1,10 @@
 "use client";
 // The editor's top bar: what is open and whether it is saved, undo and redo, the grid step and the unit,
-// what the views draw, and Save. Viewers see the same bar without any control that writes.
+// what the views draw, the exports, and Save. Viewers see the same bar without any control that writes.
 import { useId } from "react";
 import { Button } from "@/components/ui/button";
 import { api } from "@/lib/api-client";
+import { ExportMenu } from "../exports/export-menu";
 import { selectDirty, selectFaulty, redo, undo, type ShowOptions } from "../store/editor-store";
 import { useEditor, useEditorStore, useHistoryDepth } from "../store/editor-context";
 import { GRID_STEPS_MM } from "../tools/snapping";
@@ -97,6 +98,7 @@ export function EditorToolbar({ onSave }: { onSave: () => void }) {
           ))}
         </fieldset>
       </details>
+      <ExportMenu />
       {readOnly ? null : (
         <Button
           data-testid="save-layout"

@@ -30,9 +30,12 @@ export function exportFileName(meta: ExportMeta, file: ExportFile): string {
 function download(body: string | Buffer, meta: ExportMeta, file: ExportFile): Response {
   const ext = file.slice(file.lastIndexOf(".") + 1);
   const name = exportFileName(meta, file);
-  return new Response(typeof body === "string" ? body : new Uint8Array(body), {
+  const bytes = typeof body === "string" ? Buffer.from(body, "utf8") : body;
+  return new Response(new Uint8Array(bytes), {
     headers: {
       "content-type": TYPES[ext]!,
+      // The editor shows how much of the file has arrived.
+      "content-length": String(bytes.byteLength),
       "content-disposition": `attachment; filename="${name}"`,
       "cache-control": "private, no-store",
       "x-content-type-options": "nosniff",
