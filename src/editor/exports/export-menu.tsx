@@ -43,7 +43,8 @@ export function ExportMenu() {
     setOutcome(null);
     setJob({ label, progress: { phase: "making" }, abort });
     details.current?.removeAttribute("open");
-    const params = new URLSearchParams({ unit, ...query });
+    // The DXF is always 1:1 in millimetres; every other file shows lengths in the designer's unit.
+    const params = new URLSearchParams(file === "views.dxf" ? query : { unit, ...query });
     const url = `/api/workspaces/${kit.workspaceId}/kits/${kit.kitId}/exports/${file}?${params}`;
     try {
       const name = await downloadExport(url, file, (progress) => setJob((j) => (j ? { ...j, progress } : j)), abort.signal);
