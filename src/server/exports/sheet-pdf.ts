@@ -74,16 +74,17 @@ function headlineFigures(doc: Doc, kit: ExportKit, unit: LengthUnit, r: Rect): v
   const all = sheetFigureGroups(kit.analysis, unit).flatMap((g) => g.readouts);
   const shown = HEADLINE.map((id) => all.find((f) => f.id === id)).filter((f) => f !== undefined);
   const w = r.w / shown.length;
-  const boxH = 36;
+  const boxH = 31;
   shown.forEach((f, i) => {
     const x = r.x + i * w;
     doc.rect(x, r.y, w, boxH).lineWidth(0.5).stroke(RULE);
-    doc.font(SHEET_FONTS.regular).fontSize(5.5).fillColor(MUTED).text(paperText(f.label), x + 3, r.y + 2.5, plain({ width: w - 6, lineBreak: false, ellipsis: true }));
+    // One line each: a label too long for its box ends in an ellipsis (the tables spell it out).
+    doc.font(SHEET_FONTS.regular).fontSize(5.5).fillColor(MUTED).text(paperText(f.label), x + 3, r.y + 2.5, plain({ width: w - 6, height: 7, ellipsis: true }));
     doc.font(SHEET_FONTS.bold).fontSize(fittingSize(doc, f.value, w - 6, 10)).fillColor(f.tone === "bad" ? "#b91c1c" : INK).text(paperText(f.value), x + 3, r.y + 10, plain({ width: w - 6, lineBreak: false }));
-    if (f.hint) doc.font(SHEET_FONTS.regular).fontSize(5).fillColor(MUTED).text(paperText(f.hint), x + 3, r.y + 23, plain({ width: w - 6, height: 12, ellipsis: true }));
+    if (f.hint) doc.font(SHEET_FONTS.regular).fontSize(5).fillColor(MUTED).text(paperText(f.hint), x + 3, r.y + 22, plain({ width: w - 6, height: 6, ellipsis: true }));
   });
-  doc.font(SHEET_FONTS.bold).fontSize(6).fillColor("#92400e").text("Cautions", r.x, r.y + boxH + 2, plain({ width: r.w, lineBreak: false }));
-  doc.font(SHEET_FONTS.regular).fontSize(5.8).fillColor(INK).text(CAUTIONS.join(" "), r.x, r.y + boxH + 9, plain({ width: r.w, height: r.h - boxH - 8 }));
+  doc.font(SHEET_FONTS.bold).fontSize(6).fillColor("#92400e").text("Cautions", r.x, r.y + boxH + 2.5, plain({ width: r.w, lineBreak: false }));
+  doc.font(SHEET_FONTS.regular).fontSize(5.6).fillColor(INK).text(CAUTIONS.join(" "), r.x, r.y + boxH + 9.5, plain({ width: r.w, height: r.h - boxH - 9 }));
 }
 
 /** Writes down the page, starting a new page (with the running header) when the next block does not fit. */
