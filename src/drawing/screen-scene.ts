@@ -51,47 +51,69 @@ export interface ScreenFrame {
 
 const TICK_PX = 4;
 
-function marksOf(item: SceneItem, t: ViewTransform, frame: ScreenFrame, k: number): ScreenMark[] {
-  const base = { layer: item.layer, part: item.part };
-  const on = (p: PlanePoint) => planeToScreen(t, p);
+// Module-level helpers rather than closures per item: this runs for every view on every frame of a drag.
+function pointsOn(t: ViewTransform, points: readonly PlanePoint[]): ScreenPoint[] {
+  const out: ScreenPoint[] = new Array(points.length);
+  for (let i = 0; i < points.length; i++) out[i] = planeToScreen(t, points[i]!);
+  return out;
+}
+
+function scaled(dash: readonly number[] | undefined, k: number): number[] | undefined {
+  if (!dash) return undefined;
+  const out: number[] = new Array(dash.length);
+  for (let i = 0; i < dash.length; i++) out[i] = dash[i]! * k;
+  return out;
+}
+
+function dimensionMarks(item: SceneItem & { type: "dimension" }, t: ViewTransform, k: number): ScreenMark[] {
+  const a = planeToScreen(t, item.from);
+  const b = planeToScreen(t, item.to);
+  const dx = b[0] - a[0];
+  const dy = b[1] - a[1];
+  const len = Math.hypot(dx, dy) || 1;
+  const nx = -dy / len;
+  const ny = dx / len;
+  const off = item.offsetPx * k + (item.offsetMm ?? 0) * t.scale;
+  const p1: ScreenPoint = [a[0] + nx * off, a[1] + ny * off];
+  const p2: ScreenPoint = [b[0] + nx * off, b[1] + ny * off];
+  const tick = TICK_PX * k;
+  const stroke = (points: ScreenPoint[]): StrokeMark => ({ layer: item.layer, part: item.part, kind: "stroke", points, closed: false, colour: item.colour, width: 0.75 * k, round: false });
+  return [
+    stroke([p1, p2]),
+    stroke([[p1[0] - nx * tick, p1[1] - ny * tick], [p1[0] + nx * tick, p1[1] + ny * tick]]),
+    stroke([[p2[0] - nx * tick, p2[1] - ny * tick], [p2[0] + nx * tick, p2[1] + ny * tick]]),
+    { layer: item.layer, part: item.part, kind: "text", at: [(p1[0] + p2[0]) / 2 + 3 * k, (p1[1] + p2[1]) / 2 - 13 * k], text: item.text, size: 11 * k, bold: false, colour: item.colour },
+  ];
+}
+
+function markOf(item: Exclude<SceneItem, { type: "dimension" }>, t: ViewTransform, frame: ScreenFrame, k: number): ScreenMark {
+  const layer = item.layer;
+  const part = item.part;
   switch (item.type) {
     case "path":
-      return [{ ...base, kind: "stroke", points: item.points.map(on), closed: item.closed ?? false, colour: item.stroke, width: item.widthPx * k, dash: item.dashPx?.map((d) => d * k), fill: item.fill, opacity: item.opacity, round: true }];
+      return { layer, part, kind: "stroke", points: pointsOn(t, item.points), closed: item.closed ?? false, colour: item.stroke, width: item.widthPx * k, dash: scaled(item.dashPx, k), fill: item.fill, opacity: item.opacity, round: true };
     case "band":
-      return [{ ...base, kind: "stroke", points: [on(item.from), on(item.to)], closed: false, colour: item.colour, width: Math.max(1.5 * k, item.widthMm * t.scale), opacity: item.opacity, round: true }];
+      return { layer, part, kind: "stroke", points: [planeToScreen(t, item.from), planeToScreen(t, item.to)], closed: false, colour: item.colour, width: Math.max(1.5 * k, item.widthMm * t.scale), opacity: item.opacity, round: true };
     case "dot":
-      return [{ ...base, kind: "circle", at: on(item.at), radius: Math.max(item.radiusPx * k, (item.radiusMm ?? 0) * t.scale), fill: item.fill, stroke: item.stroke, width: item.widthPx !== undefined ? item.widthPx * k : item.stroke ? 1.5 * k : undefined }];
+      return { layer, part, kind: "circle", at: planeToScreen(t, item.at), radius: Math.max(item.radiusPx * k, (item.radiusMm ?? 0) * t.scale), fill: item.fill, stroke: item.stroke, width: item.widthPx !== undefined ? item.widthPx * k : item.stroke ? 1.5 * k : undefined };
     case "label": {
-      const [x, y] = item.pinStart ? [frame.left, on(item.at)[1]] : on(item.at);
-      return [{ ...base, kind: "text", at: [x + item.dxPx * k, y + item.dyPx * k], text: item.text, size: item.sizePx * k, bold: item.bold ?? false, colour: item.colour }];
-    }
-    case "dimension": {
-      const a = on(item.from);
-      const b = on(item.to);
-      const dx = b[0] - a[0];
-      const dy = b[1] - a[1];
-      const len = Math.hypot(dx, dy) || 1;
-      const n: ScreenPoint = [-dy / len, dx / len];
-      const off = item.offsetPx * k + (item.offsetMm ?? 0) * t.scale;
-      const p1: ScreenPoint = [a[0] + n[0] * off, a[1] + n[1] * off];
-      const p2: ScreenPoint = [b[0] + n[0] * off, b[1] + n[1] * off];
-      const tick = TICK_PX * k;
-      const line = (points: ScreenPoint[]): StrokeMark => ({ ...base, kind: "stroke", points, closed: false, colour: item.colour, width: 0.75 * k, round: false });
-      return [
-        line([p1, p2]),
-        line([[p1[0] - n[0] * tick, p1[1] - n[1] * tick], [p1[0] + n[0] * tick, p1[1] + n[1] * tick]]),
-        line([[p2[0] - n[0] * tick, p2[1] - n[1] * tick], [p2[0] + n[0] * tick, p2[1] + n[1] * tick]]),
-        { ...base, kind: "text", at: [(p1[0] + p2[0]) / 2 + 3 * k, (p1[1] + p2[1]) / 2 - 13 * k], text: item.text, size: 11 * k, bold: false, colour: item.colour },
-      ];
+      const at = planeToScreen(t, item.at);
+      const x = item.pinStart ? frame.left : at[0];
+      return { layer, part, kind: "text", at: [x + item.dxPx * k, at[1] + item.dyPx * k], text: item.text, size: item.sizePx * k, bold: item.bold ?? false, colour: item.colour };
     }
     case "rule": {
-      const y = on([0, item.v])[1];
-      return [{ ...base, kind: "stroke", points: [[frame.left, y], [frame.left + frame.width, y]], closed: false, colour: item.stroke, width: item.widthPx * k, dash: item.dashPx?.map((d) => d * k), round: true }];
+      const y = -item.v * t.scale + t.oy;
+      return { layer, part, kind: "stroke", points: [[frame.left, y], [frame.left + frame.width, y]], closed: false, colour: item.stroke, width: item.widthPx * k, dash: scaled(item.dashPx, k), round: true };
     }
   }
 }
 
 /** Every mark of the scene in paint order, through the view transform `t` (plane mm → screen). */
 export function sceneMarks(scene: Scene, t: ViewTransform, frame: ScreenFrame, k = 1): ScreenMark[] {
-  return scene.items.flatMap((item) => marksOf(item, t, frame, k));
+  const marks: ScreenMark[] = [];
+  for (const item of scene.items) {
+    if (item.type === "dimension") marks.push(...dimensionMarks(item, t, k));
+    else marks.push(markOf(item, t, frame, k));
+  }
+  return marks;
 }
