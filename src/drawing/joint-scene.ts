@@ -36,7 +36,7 @@ export function jointScene(input: JointSceneInput): JointScene {
   const section = jointSection({ mouthDiameterMm: d.cupMouthDiameterMm, pivotDepthMm: d.pivotDepthMm, neckDiameterMm: Math.min(d.neckDiameterMm, d.cupMouthDiameterMm), boreDiameterMm: d.boreDiameterMm, betaDeg: beta, slotted: d.slottedCup, slotLimitDeg: d.slotLimitDeg });
   const state: ClearanceState = valid ? section.state : "touching";
   const colour = CLEARANCE_COLOUR[state];
-  const words = valid ? CLEARANCE_LABEL[section.state] : "neck wider than the mouth";
+  const words = valid ? CLEARANCE_LABEL[section.state] : "wider than the mouth";
   const at = `${input.wheel ? `${input.wheel} wheel, joint` : "Joint"} at ${fmt(beta, 1, "°")}`;
   const summary = section.clearanceMm !== null
     ? `${at}: neck ${words}, gap ${formatLength(section.clearanceMm, unit, 2)}`
@@ -56,16 +56,18 @@ export function jointScene(input: JointSceneInput): JointScene {
     items.push(
       { type: "path", layer: "dimensions", part: "gap", points: [section.rim, section.neckSurfaceNearRim], stroke: colour, widthPx: 2 },
       { type: "dot", layer: "shaft-joint", part: "mouth-rim", at: section.rim, radiusPx: 3.5, fill: colour },
-      { type: "label", layer: "dimensions", part: "gap-label", at: section.rim, text: `gap ${formatLength(section.clearanceMm, unit, 2)}`, colour, dxPx: 6, dyPx: -18, sizePx: 11, bold: true },
+      { type: "label", layer: "dimensions", part: "gap-label", at: section.rim, text: `gap ${formatLength(section.clearanceMm, unit, 2)}`, colour, dxPx: 6, dyPx: -16, dyMm: -section.wallMm, sizePx: 11, bold: true },
     );
   }
   if (input.showDimensions) {
     const R = d.cupMouthDiameterMm / 2;
+    // Clear of the part: the mouth just outside its plane with its figure under the cup's corner, the
+    // pivot depth under the lower wall, β inside the cup beside the pivot.
     items.push(
-      { type: "dimension", layer: "dimensions", part: "cup-mouth", from: [-d.pivotDepthMm, -R], to: [-d.pivotDepthMm, R], text: `mouth ⌀${formatLength(d.cupMouthDiameterMm, unit, 2)}`, offsetPx: -30, offsetMm: -d.cupMouthDiameterMm * 0.25, colour: INK.label },
-      { type: "dimension", layer: "dimensions", part: "pivot-depth", from: [-d.pivotDepthMm, -R], to: [0, -R], text: `pivot depth ${formatLength(d.pivotDepthMm, unit, 2)}`, offsetPx: -10, offsetMm: -d.cupMouthDiameterMm * 0.3, colour: INK.label },
+      { type: "dimension", layer: "dimensions", part: "cup-mouth", from: [-d.pivotDepthMm, -R], to: [-d.pivotDepthMm, R], text: `mouth ⌀${formatLength(d.cupMouthDiameterMm, unit, 2)}`, offsetPx: -10, label: "outside-from", colour: INK.label },
+      { type: "dimension", layer: "dimensions", part: "pivot-depth", from: [0, -R], to: [-d.pivotDepthMm, -R], text: `pivot depth ${formatLength(d.pivotDepthMm, unit, 2)}`, offsetPx: -8, offsetMm: -section.wallMm, label: "under", colour: INK.label },
       { type: "label", layer: "dimensions", part: "neck-label", at: section.neckAxis[1], text: `neck ⌀${formatLength(d.neckDiameterMm, unit, 2)}`, dxPx: -20, dyPx: -24, sizePx: 11, colour: INK.label },
-      { type: "label", layer: "dimensions", part: "beta-label", at: [0, 0], text: `β ${fmt(beta, 1, "°")}`, dxPx: 8, dyPx: 6, sizePx: 11, bold: true, colour: INK.label },
+      { type: "label", layer: "dimensions", part: "beta-label", at: [0, 0], text: `β ${fmt(beta, 1, "°")}`, dxPx: 4, dyPx: -5, beside: { radiusPx: 3, radiusMm: section.pivotRadiusMm }, sizePx: 11, bold: true, colour: INK.label },
     );
     if (input.detail === "sheet" && d.boreDiameterMm) {
       items.push({ type: "label", layer: "dimensions", part: "bore-label", at: section.neckAxis[1], text: `bore ⌀${formatLength(d.boreDiameterMm, unit, 2)}`, dxPx: -20, dyPx: -12, sizePx: 11, colour: INK.label });

@@ -47,7 +47,11 @@ export interface SceneDot extends ItemBase {
   readonly widthPx?: number;
 }
 
-/** Text beside a point; `pinStart` moves it to the view's left edge (a label on a line across the view). */
+/**
+ * Text beside a point (lines split at "\n"), offset by (dxPx, dyPx) down the screen, plus `dyMm` of the
+ * part's own size (−wall: above a wall of that thickness), plus the radius of a dot it is `beside` (so it
+ * clears the dot at any zoom). `align: "center"` centres it on the offset point; `pinStart` moves it to the view's left edge.
+ */
 export interface SceneLabel extends ItemBase {
   readonly type: "label";
   readonly at: PlanePoint;
@@ -55,8 +59,11 @@ export interface SceneLabel extends ItemBase {
   readonly colour: string;
   readonly dxPx: number;
   readonly dyPx: number;
+  readonly dyMm?: number;
+  readonly beside?: { readonly radiusPx: number; readonly radiusMm: number };
   readonly sizePx: number;
   readonly bold?: boolean;
+  readonly align?: "left" | "center";
   readonly pinStart?: boolean;
 }
 
@@ -70,6 +77,11 @@ export interface SceneDimension extends ItemBase {
   /** A further offset in mm, so the line clears a part whatever the zoom (the cup wall). */
   readonly offsetMm?: number;
   readonly colour: string;
+  /**
+   * Where the figure goes: at the middle, beside the line (default); centred under it; or past the `from`
+   * end, where the middle is crowded (inside a small part). An empty text draws the line alone.
+   */
+  readonly label?: "middle" | "under" | "outside-from";
 }
 
 /** A horizontal line at height v across the whole view (the ground, the axle lines). */

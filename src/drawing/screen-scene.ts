@@ -31,7 +31,10 @@ export interface CircleMark extends Mark {
   readonly width?: number;
 }
 
-/** Text with its top-left corner at `at`. */
+/**
+ * Text with its top-left corner at `at`, one line per "\n" (each `size` high). With a `width` the text
+ * is aligned in a box of that width starting at `at`.
+ */
 export interface TextMark extends Mark {
   readonly kind: "text";
   readonly at: ScreenPoint;
@@ -39,6 +42,8 @@ export interface TextMark extends Mark {
   readonly size: number;
   readonly bold: boolean;
   readonly colour: string;
+  readonly align: "left" | "center" | "right";
+  readonly width?: number;
 }
 
 export type ScreenMark = StrokeMark | CircleMark | TextMark;
@@ -50,6 +55,8 @@ export interface ScreenFrame {
 }
 
 const TICK_PX = 4;
+/** Width of the box a centred or right-aligned label is set in, px. */
+const LABEL_BOX_PX = 160;
 
 // Module-level helpers rather than closures per item: this runs for every view on every frame of a drag.
 function pointsOn(t: ViewTransform, points: readonly PlanePoint[]): ScreenPoint[] {
@@ -65,6 +72,20 @@ function scaled(dash: readonly number[] | undefined, k: number): number[] | unde
   return out;
 }
 
+/** Where a dimension's figure goes, in screen units (see SceneDimension.label). */
+function dimensionText(item: SceneItem & { type: "dimension" }, p1: ScreenPoint, p2: ScreenPoint, ux: number, uy: number, k: number): Pick<TextMark, "at" | "align" | "width"> {
+  const mid: ScreenPoint = [(p1[0] + p2[0]) / 2, (p1[1] + p2[1]) / 2];
+  const box = LABEL_BOX_PX * k;
+  if (item.label === "under") return { at: [mid[0] - box / 2, Math.max(p1[1], p2[1]) + 4 * k], align: "center", width: box };
+  if (item.label === "outside-from") {
+    // Past the `from` end, the line leaving it along (ux, uy): on along a level line, or left of an upright one.
+    const [x, y] = p1;
+    if (Math.abs(ux) >= Math.abs(uy)) return ux > 0 ? { at: [x - 4 * k - box, y - 6 * k], align: "right", width: box } : { at: [x + 4 * k, y - 6 * k], align: "left" };
+    return { at: [x - 4 * k - box, uy < 0 ? y + 2 * k : y - 14 * k], align: "right", width: box };
+  }
+  return { at: [mid[0] + 3 * k, mid[1] - 13 * k], align: "left" };
+}
+
 function dimensionMarks(item: SceneItem & { type: "dimension" }, t: ViewTransform, k: number): ScreenMark[] {
   const a = planeToScreen(t, item.from);
   const b = planeToScreen(t, item.to);
@@ -78,12 +99,13 @@ function dimensionMarks(item: SceneItem & { type: "dimension" }, t: ViewTransfor
   const p2: ScreenPoint = [b[0] + nx * off, b[1] + ny * off];
   const tick = TICK_PX * k;
   const stroke = (points: ScreenPoint[]): StrokeMark => ({ layer: item.layer, part: item.part, kind: "stroke", points, closed: false, colour: item.colour, width: 0.75 * k, round: false });
-  return [
+  const marks: ScreenMark[] = [
     stroke([p1, p2]),
     stroke([[p1[0] - nx * tick, p1[1] - ny * tick], [p1[0] + nx * tick, p1[1] + ny * tick]]),
     stroke([[p2[0] - nx * tick, p2[1] - ny * tick], [p2[0] + nx * tick, p2[1] + ny * tick]]),
-    { layer: item.layer, part: item.part, kind: "text", at: [(p1[0] + p2[0]) / 2 + 3 * k, (p1[1] + p2[1]) / 2 - 13 * k], text: item.text, size: 11 * k, bold: false, colour: item.colour },
   ];
+  if (item.text) marks.push({ layer: item.layer, part: item.part, kind: "text", ...dimensionText(item, p1, p2, dx / len, dy / len, k), text: item.text, size: 11 * k, bold: false, colour: item.colour });
+  return marks;
 }
 
 function markOf(item: Exclude<SceneItem, { type: "dimension" }>, t: ViewTransform, frame: ScreenFrame, k: number): ScreenMark {
@@ -98,14 +120,23 @@ function markOf(item: Exclude<SceneItem, { type: "dimension" }>, t: ViewTransfor
       return { layer, part, kind: "circle", at: planeToScreen(t, item.at), radius: Math.max(item.radiusPx * k, (item.radiusMm ?? 0) * t.scale), fill: item.fill, stroke: item.stroke, width: item.widthPx !== undefined ? item.widthPx * k : item.stroke ? 1.5 * k : undefined };
     case "label": {
       const at = planeToScreen(t, item.at);
-      const x = item.pinStart ? frame.left : at[0];
-      return { layer, part, kind: "text", at: [x + item.dxPx * k, at[1] + item.dyPx * k], text: item.text, size: item.sizePx * k, bold: item.bold ?? false, colour: item.colour };
+      const dx = item.dxPx * k + (item.beside ? Math.max(item.beside.radiusPx * k, item.beside.radiusMm * t.scale) : 0);
+      const x = (item.pinStart ? frame.left : at[0]) + dx;
+      const y = at[1] + item.dyPx * k + (item.dyMm ?? 0) * t.scale;
+      const text = { layer, part, kind: "text" as const, text: item.text, size: item.sizePx * k, bold: item.bold ?? false, colour: item.colour };
+      if (item.align === "center") return { ...text, at: [x - (LABEL_BOX_PX * k) / 2, y], align: "center", width: LABEL_BOX_PX * k };
+      return { ...text, at: [x, y], align: "left" };
     }
     case "rule": {
       const y = -item.v * t.scale + t.oy;
       return { layer, part, kind: "stroke", points: [[frame.left, y], [frame.left + frame.width, y]], closed: false, colour: item.stroke, width: item.widthPx * k, dash: scaled(item.dashPx, k), round: true };
     }
   }
+}
+
+/** The marks of one item, through the view transform `t` (plane mm → screen). */
+export function itemMarks(item: SceneItem, t: ViewTransform, frame: ScreenFrame, k = 1): ScreenMark[] {
+  return item.type === "dimension" ? dimensionMarks(item, t, k) : [markOf(item, t, frame, k)];
 }
 
 /** Every mark of the scene in paint order, through the view transform `t` (plane mm → screen). */

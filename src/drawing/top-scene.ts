@@ -50,7 +50,7 @@ export function topScene(input: TopSceneInput): Scene {
   const items: SceneItem[] = [
     { type: "path", layer: "construction", part: "centreline", points: [[0, -layout.frontView.tyreRadiusMm * 2], [0, L + 10]], stroke: INK.ghost, widthPx: 1, dashPx: [6, 4] },
     { type: "rule", layer: "construction", part: "front-axle-line", v: 0, stroke: INK.ghost, widthPx: 1, dashPx: [2, 4] },
-    { type: "label", layer: "construction", part: "front-axle-label", at: [0, 0], pinStart: true, text: "front axle line", dxPx: 4, dyPx: 2, colour: INK.ground, sizePx: 10 },
+    { type: "label", layer: "construction", part: "front-axle-label", at: [0, 0], text: "front axle line", dxPx: 4, dyPx: 4, colour: INK.ground, sizePx: 10 },
   ];
   if (show.ackermann) {
     items.push(
@@ -77,8 +77,11 @@ export function topScene(input: TopSceneInput): Scene {
     items.push(...wheelItems("right", d.right, layout.drive.neckDiameterMm, null, INK.shaft));
     if (show.dimensions) {
       items.push(
-        { type: "dimension", layer: "dimensions", part: "caster-trail", from: d.left.kingpinGround, to: [d.left.contactPatch[0], d.left.kingpinGround[1]], text: `trail ${formatLength(d.trailMm, unit, 1, true)}`, offsetPx: 16, colour: INK.label },
-        { type: "dimension", layer: "dimensions", part: "steering-arm-length", from: d.left.steeringArm[0], to: d.left.steeringArm[1], text: `arm ${formatLength(d.steeringArmLengthMm, unit, 1)}`, offsetPx: -14, colour: INK.label },
+        // The figures go ahead of the tyre, where the drawing is empty: beside the small parts they would
+        // cover the linkage or run off the view.
+        { type: "dimension", layer: "dimensions", part: "caster-trail", from: d.left.kingpinGround, to: [d.left.contactPatch[0], d.left.kingpinGround[1]], text: "", offsetPx: 16, colour: INK.label },
+        { type: "dimension", layer: "dimensions", part: "steering-arm-length", from: d.left.steeringArm[0], to: d.left.steeringArm[1], text: "", offsetPx: -14, colour: INK.label },
+        { type: "label", layer: "dimensions", part: "arm-and-trail", at: [d.left.wheelCentre[0], -layout.frontView.tyreRadiusMm], text: `arm ${formatLength(d.steeringArmLengthMm, unit, 1)}\ntrail ${formatLength(d.trailMm, unit, 1, true)}`, dxPx: 0, dyPx: 6, sizePx: 11, align: "center", colour: INK.label },
         { type: "label", layer: "dimensions", part: "left-road-wheel-angle", at: d.left.wheelCentre, text: fmt(d.left.roadWheelDeg, 1, "°"), dxPx: 8, dyPx: -20, sizePx: 11, bold: true, colour: INK.label },
         { type: "label", layer: "dimensions", part: "right-road-wheel-angle", at: d.right.wheelCentre, text: fmt(d.right.roadWheelDeg, 1, "°"), dxPx: -36, dyPx: -20, sizePx: 11, bold: true, colour: INK.label },
       );

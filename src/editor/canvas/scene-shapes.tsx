@@ -29,7 +29,7 @@ function MarkShape({ mark }: { mark: ScreenMark }) {
     case "circle":
       return <Circle listening={false} x={mark.at[0]} y={mark.at[1]} radius={mark.radius} fill={mark.fill} stroke={mark.stroke} strokeWidth={mark.width} perfectDrawEnabled={false} />;
     case "text":
-      return <Text listening={false} x={mark.at[0]} y={mark.at[1]} text={mark.text} fontSize={mark.size} fontFamily={CANVAS_FONT} fontStyle={mark.bold ? "bold" : "normal"} fill={mark.colour} perfectDrawEnabled={false} />;
+      return <Text listening={false} x={mark.at[0]} y={mark.at[1]} width={mark.width} align={mark.align} text={mark.text} fontSize={mark.size} fontFamily={CANVAS_FONT} fontStyle={mark.bold ? "bold" : "normal"} fill={mark.colour} perfectDrawEnabled={false} />;
   }
 }
 

@@ -27,7 +27,11 @@ export function drawMarks(doc: PDFKit.PDFDocument, marks: readonly ScreenMark[])
         else doc.fill(m.fill);
         break;
       case "text":
-        doc.font(m.bold ? SHEET_FONTS.bold : SHEET_FONTS.regular).fontSize(m.size).fillColor(m.colour).text(paperText(m.text), m.at[0], m.at[1], plain({ lineBreak: false }));
+        // A line per "\n", each the type's size apart as on the canvas, aligned in the mark's box.
+        doc.font(m.bold ? SHEET_FONTS.bold : SHEET_FONTS.regular).fontSize(m.size).fillColor(m.colour);
+        m.text.split("\n").forEach((line, i) => {
+          doc.text(paperText(line), m.at[0], m.at[1] + i * m.size, plain(m.width ? { width: m.width, align: m.align, lineBreak: false } : { lineBreak: false }));
+        });
         break;
     }
     doc.restore();

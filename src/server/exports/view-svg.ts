@@ -32,8 +32,15 @@ function markSvg(m: ScreenMark): string {
     }
     case "circle":
       return `<circle ${common} cx="${num(m.at[0])}" cy="${num(m.at[1])}" r="${num(m.radius)}" fill="${m.fill}"${m.stroke ? ` stroke="${m.stroke}" stroke-width="${num(m.width ?? 1.5)}"` : ""}/>`;
-    case "text":
-      return `<text ${common} x="${num(m.at[0])}" y="${num(m.at[1])}" font-size="${num(m.size)}"${m.bold ? ` font-weight="bold"` : ""} fill="${m.colour}" dominant-baseline="hanging">${escapeXml(m.text)}</text>`;
+    case "text": {
+      // Aligned in its box as the canvas aligns it; one tspan a line, a line being the type's size high.
+      const w = m.width ?? 0;
+      const x = m.align === "center" ? m.at[0] + w / 2 : m.align === "right" ? m.at[0] + w : m.at[0];
+      const anchor = m.align === "center" ? ` text-anchor="middle"` : m.align === "right" ? ` text-anchor="end"` : "";
+      const lines = m.text.split("\n");
+      const body = lines.length === 1 ? escapeXml(m.text) : lines.map((l, i) => `<tspan x="${num(x)}" dy="${i === 0 ? 0 : num(m.size)}">${escapeXml(l)}</tspan>`).join("");
+      return `<text ${common} x="${num(x)}" y="${num(m.at[1])}" font-size="${num(m.size)}"${m.bold ? ` font-weight="bold"` : ""} fill="${m.colour}"${anchor} dominant-baseline="hanging">${body}</text>`;
+    }
   }
 }
 

@@ -2,15 +2,16 @@ import "server-only";
 // The three views as one DXF drawing at 1:1 in millimetres, one layer per kind of part, so a designer can
 // lay the corner under their CAD model. The front view sits at its own coordinates (y, z) — its points
 // are the layout's — the top view (y, −x) below it and the joint section (pivot at its origin) to the
-// right, each shifted by a whole offset its title states.
+// right, each shifted by a whole offset its title states. Text and dimensions are placed as the canvas
+// places them at 4 px per mm (src/drawing/screen-scene.ts), then brought back to millimetres.
 import Drawing from "dxf-writer";
-import type { Scene, SceneItem, SceneLayer } from "@/drawing/scene";
-import type { PlanePoint } from "@/drawing/view-transform";
-import type { ExportKit } from "./export-kit";
 import { kitScenes } from "@/drawing/kit-scenes";
+import type { Scene, SceneItem, SceneLayer } from "@/drawing/scene";
+import { itemMarks, type ScreenFrame, type ScreenMark } from "@/drawing/screen-scene";
+import type { ExportKit } from "./export-kit";
 
-/** Millimetres per screen pixel for what the scenes size in pixels (text, offsets, markers): 0.25 mm. */
-const MM_PER_PX = 0.25;
+/** Screen pixels per millimetre the labels and dimensions are laid out at: text 11 px high is 2.75 mm. */
+const PX_PER_MM = 4;
 /** Space between the views, mm. */
 const GAP_MM = 40;
 
@@ -29,64 +30,57 @@ const LAYER_STYLE: Record<SceneLayer, { colour: number; lineType: string }> = {
 export const dxfLayerName = (layer: SceneLayer) => layer.toUpperCase().replace("-", "_");
 
 type Offset = readonly [number, number];
+const T = { scale: PX_PER_MM, ox: 0, oy: 0 };
 
-function drawItem(dxf: Drawing, item: SceneItem, off: Offset, span: readonly [number, number]): void {
-  const at = (p: PlanePoint): [number, number] => [p[0] + off[0], p[1] + off[1]];
-  dxf.setActiveLayer(dxfLayerName(item.layer));
-  switch (item.type) {
-    case "path": {
-      const pts = item.points.map(at);
-      if (pts.length === 2 && !item.closed) dxf.drawLine(pts[0]![0], pts[0]![1], pts[1]![0], pts[1]![1]);
-      else dxf.drawPolyline(pts, item.closed ?? false);
+/** A mark's screen point back in the plane, mm, moved by the view's offset. */
+const mm = (p: readonly [number, number], off: Offset): [number, number] => [p[0] / PX_PER_MM + off[0], -p[1] / PX_PER_MM + off[1]];
+
+function drawMark(dxf: Drawing, m: ScreenMark, off: Offset): void {
+  switch (m.kind) {
+    case "stroke": {
+      const pts = m.points.map((p) => mm(p, off));
+      if (pts.length === 2 && !m.closed) dxf.drawLine(pts[0]![0], pts[0]![1], pts[1]![0], pts[1]![1]);
+      else dxf.drawPolyline(pts, m.closed);
       return;
     }
-    case "band": {
-      // The outline at the part's real width, and its centre line.
-      const [a, b] = [at(item.from), at(item.to)];
-      const len = Math.hypot(b[0] - a[0], b[1] - a[1]) || 1;
-      const h = item.widthMm / 2;
-      const n = [((a[1] - b[1]) / len) * h, ((b[0] - a[0]) / len) * h];
-      dxf.drawPolyline([[a[0] + n[0]!, a[1] + n[1]!], [b[0] + n[0]!, b[1] + n[1]!], [b[0] - n[0]!, b[1] - n[1]!], [a[0] - n[0]!, a[1] - n[1]!]], true);
-      dxf.drawLine(a[0], a[1], b[0], b[1]);
+    case "circle": {
+      const [x, y] = mm(m.at, off);
+      dxf.drawCircle(x, y, m.radius / PX_PER_MM);
       return;
     }
-    case "dot": {
-      const [x, y] = at(item.at);
-      dxf.drawCircle(x, y, item.radiusMm ?? item.radiusPx * MM_PER_PX);
-      return;
-    }
-    case "label": {
-      // Screen offsets point down; the plane's v points up. DXF text sits on its baseline.
-      const [x, y] = at(item.pinStart ? [span[0], item.at[1]] : item.at);
-      const height = item.sizePx * MM_PER_PX;
-      dxf.drawText(x + item.dxPx * MM_PER_PX, y - item.dyPx * MM_PER_PX - height, height, 0, item.text);
-      return;
-    }
-    case "dimension": {
-      const [a, b] = [at(item.from), at(item.to)];
-      const len = Math.hypot(b[0] - a[0], b[1] - a[1]) || 1;
-      const n = [(b[1] - a[1]) / len, -(b[0] - a[0]) / len];
-      const o = item.offsetPx * MM_PER_PX + (item.offsetMm ?? 0);
-      const p1 = [a[0] + n[0]! * o, a[1] + n[1]! * o];
-      const p2 = [b[0] + n[0]! * o, b[1] + n[1]! * o];
-      const tick = 4 * MM_PER_PX;
-      dxf.drawLine(p1[0]!, p1[1]!, p2[0]!, p2[1]!);
-      dxf.drawLine(p1[0]! - n[0]! * tick, p1[1]! - n[1]! * tick, p1[0]! + n[0]! * tick, p1[1]! + n[1]! * tick);
-      dxf.drawLine(p2[0]! - n[0]! * tick, p2[1]! - n[1]! * tick, p2[0]! + n[0]! * tick, p2[1]! + n[1]! * tick);
-      dxf.drawText((p1[0]! + p2[0]!) / 2 + 3 * MM_PER_PX, (p1[1]! + p2[1]!) / 2 + 2 * MM_PER_PX, 11 * MM_PER_PX, 0, item.text);
-      return;
-    }
-    case "rule": {
-      const y = item.v + off[1];
-      dxf.drawLine(span[0] + off[0], y, span[1] + off[0], y);
+    case "text": {
+      // A TEXT entity a line, on its baseline a type size below the line's top.
+      const w = m.width ?? 0;
+      const x = m.align === "center" ? m.at[0] + w / 2 : m.align === "right" ? m.at[0] + w : m.at[0];
+      m.text.split("\n").forEach((line, i) => {
+        const [px, py] = mm([x, m.at[1] + (i + 1) * m.size], off);
+        dxf.drawText(px, py, m.size / PX_PER_MM, 0, line, m.align);
+      });
       return;
     }
   }
 }
 
+function drawItem(dxf: Drawing, item: SceneItem, off: Offset, frame: ScreenFrame): void {
+  dxf.setActiveLayer(dxfLayerName(item.layer));
+  if (item.type === "band") {
+    // A part drawn to its real width: its outline and its centre line.
+    const a = [item.from[0] + off[0], item.from[1] + off[1]];
+    const b = [item.to[0] + off[0], item.to[1] + off[1]];
+    const len = Math.hypot(b[0]! - a[0]!, b[1]! - a[1]!) || 1;
+    const h = item.widthMm / 2;
+    const n = [((a[1]! - b[1]!) / len) * h, ((b[0]! - a[0]!) / len) * h];
+    dxf.drawPolyline([[a[0]! + n[0]!, a[1]! + n[1]!], [b[0]! + n[0]!, b[1]! + n[1]!], [b[0]! - n[0]!, b[1]! - n[1]!], [a[0]! - n[0]!, a[1]! - n[1]!]], true);
+    dxf.drawLine(a[0]!, a[1]!, b[0]!, b[1]!);
+    return;
+  }
+  for (const m of itemMarks(item, T, frame)) drawMark(dxf, m, off);
+}
+
 function drawView(dxf: Drawing, scene: Scene, off: Offset): void {
-  const span: [number, number] = [scene.box.minU - 10, scene.box.maxU + 10];
-  for (const item of scene.items) drawItem(dxf, item, off, span);
+  // Lines across the view reach 10 mm past its box.
+  const frame: ScreenFrame = { left: (scene.box.minU - 10) * PX_PER_MM, width: (scene.box.maxU - scene.box.minU + 20) * PX_PER_MM };
+  for (const item of scene.items) drawItem(dxf, item, off, frame);
   dxf.setActiveLayer(dxfLayerName("dimensions"));
   const origin = off[0] === 0 && off[1] === 0 ? "at its own coordinates" : `origin moved to (${off[0]}, ${off[1]})`;
   dxf.drawText(scene.box.minU + off[0], scene.box.maxV + off[1] + 8, 3, 0, `${scene.title}: ${scene.axes}; mm, ${origin}`);
