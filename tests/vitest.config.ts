@@ -13,7 +13,7 @@ export default defineConfig({
     projects: [
       {
         resolve: { alias },
-        test: { name: "unit", environment: "node", include: ["tests/engine/**/*.test.ts", "tests/contracts/**/*.test.ts", "tests/lib/**/*.test.ts"] },
+        test: { name: "unit", environment: "node", include: ["tests/engine/**/*.test.ts", "tests/contracts/**/*.test.ts", "tests/lib/**/*.test.ts", "tests/figures/**/*.test.ts", "tests/drawing/**/*.test.ts"] },
       },
       {
         resolve: { alias },

@@ -11,11 +11,11 @@ import { selectShownLayout } from "../store/editor-store";
 import { useEditor, useEditorStore } from "../store/editor-context";
 import { createHandleDragTool, type PointerInput } from "../tools/handle-drag-tool";
 import { nudgeDelta } from "../tools/snapping";
-import { formatLength } from "../units/length-unit";
-import { INK } from "./drawing-colours";
-import { GridShape } from "./plane-shapes";
+import { formatLength } from "@/figures/length-unit";
+import { INK } from "@/drawing/drawing-colours";
+import { GridShape } from "./grid-shape";
 import { useElementSize } from "./use-element-size";
-import { fitBox, panBy, planeToScreen, scaleBarMm, screenToPlane, zoomAt, type PlaneBox, type ScreenPoint, type ViewTransform } from "./view-transform";
+import { fitBox, panBy, planeToScreen, scaleBarMm, screenToPlane, zoomAt, type PlaneBox, type ScreenPoint, type ViewTransform } from "@/drawing/view-transform";
 
 const HIT_RADIUS_PX = 10;
 
