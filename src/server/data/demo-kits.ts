@@ -6,6 +6,7 @@ const NOTES: Record<string, string> = {
   "tarnwick-10-cvd": "CVD variant with a 4.5 mm neck.",
   "tarnwick-10-printed": "Printed PA12-CF shaft in a slotted cup: a test part, not for racing.",
   "tarnwick-10-cardan": "Single cardan on a hollow 7075 shaft; check the speed fluctuation at lock.",
+  "tarnwick-10-bellcrank": "Bellcrank pair and drag link in place of the rack; same 5.0 mm dogbone as the baseline.",
 };
 
 /** The demo kits: the invented Tarnwick 10's front corner and the variants its designers tried. */
