@@ -46,7 +46,8 @@ function checkedSteps(value: number | undefined, key: keyof typeof ANALYZE_LIMIT
 
 function materialFigure(m: KitMaterial): MaterialFigure {
   if (m.kind === "catalogue") return materialById(m.id);
-  const source = { provenance: ["found" as const], citation: m.source };
+  // The designer's own source, as entered: not a citation of ours.
+  const source = { note: `as entered by the designer: ${m.source}`, cites: [] };
   if (m.printed) {
     return {
       kind: "printed",
@@ -56,7 +57,7 @@ function materialFigure(m: KitMaterial): MaterialFigure {
       acrossLayerStrengthMpa: m.yieldMpa,
       strengthSource: source,
       derateFactor: m.derate,
-      derateSource: { provenance: ["common-practice"], citation: "derate factor entered by the designer" },
+      derateSource: { note: "derate factor entered by the designer", cites: [] },
     };
   }
   // A metal's derate (1 for a certified bar) scales its yield directly.
