@@ -52,7 +52,7 @@ export function lockJointRoot(row: CornerRow, li: LockInputs, scratch: PointScra
 
 /** The last u in [lo, hi] where the tie rod still reaches at both wheels (bisection on the solver's own reach test, so it solves). */
 export function lockToggleBisect(row: CornerRow, sg: number, lo: number, hi: number, ctx: Context, scratch: PointScratch): number {
-  for (let it = 0; it < 60 && hi - lo > 1e-12 * (1 + Math.abs(hi)); it++) {
+  for (let it = 0; it < 52 && hi - lo > 1e-12; it++) {
     const mid = 0.5 * (lo + hi);
     if (lockReachesAt(row, sg, mid, ctx, scratch)) lo = mid;
     else hi = mid;
