@@ -1,8 +1,9 @@
 "use client";
 // The top view (x–y, seen from above, drawn in line with the front view so y runs the same way; forward
-// is down the screen): both front wheels at the previewed steer, steering arms, tie rods and the rack,
+// is down the screen): both front wheels at the previewed steer, steering arms, tie rods and the rack (or
+// the bellcranks: pivot, arm and the arc the tie-rod inner ball sweeps),
 // the shafts, and the turning construction (the wheel axes, where they meet, and the rear axle line).
-import { useDeferredValue, useMemo } from "react";
+import { Fragment, useDeferredValue, useMemo } from "react";
 import { fmt } from "@/lib/format";
 import { handlesOf } from "../document/handles";
 import { useEditor } from "../store/editor-context";
@@ -16,8 +17,6 @@ import { ViewFrame } from "./view-frame";
 import { BindingNote, FaultNote, StaticGhost, faultColour } from "./view-notes";
 import type { ViewTransform } from "./view-transform";
 import type { PartId } from "../document/handles";
-
-const HANDLES = handlesOf("top");
 
 function Wheel({ t, w, neckMm, part, shaftColour }: { t: ViewTransform; w: TopWheelDrawing; neckMm: number; part: PartId | null; shaftColour: string }) {
   return (
@@ -40,8 +39,9 @@ export function TopView() {
   const fault = useEditor((s) => s.live.fault);
   // Low priority: during a drag the readouts paint first, the drawing's figures follow a frame later.
   const analysis = useDeferredValue(useEditor((s) => s.live.analysis));
-  const previewing = useEditor((s) => s.preview.rackMm !== 0 || s.preview.travelMm !== 0);
+  const previewing = useEditor((s) => s.preview.steerInput !== 0 || s.preview.travelMm !== 0);
   const box = useMemo(() => topBox(layout), [layout]);
+  const handles = useMemo(() => handlesOf("top", layout), [layout]);
   const d = pose ? topDrawing(pose, layout) : null;
   const binding = pose ? previewBinding(pose, layout, analysis) : null;
   const shaftColour = binding?.kind === "joint" ? CLEARANCE_COLOUR.touching : INK.shaft;
@@ -59,7 +59,7 @@ export function TopView() {
       title="Top view"
       axes="y left →, x forward ↓ (seen from above)"
       box={box}
-      handles={HANDLES}
+      handles={handles}
       notes={
         <>
           {fault || error ? <FaultNote message={fault?.message ?? error!} /> : null}
@@ -92,7 +92,14 @@ export function TopView() {
                     <PlaneDot t={t} at={d.turnCentre} radiusPx={4} fill="#ffffff" stroke={INK.construction} width={2} />
                   </>
                 ) : null}
-                <PlaneLine t={t} points={d.rack} stroke={faultColour(part, "tieRod", INK.arm)} width={5} opacity={0.6} />
+                {d.rack ? <PlaneLine t={t} points={d.rack} stroke={faultColour(part, "tieRod", INK.arm)} width={5} opacity={0.6} /> : null}
+                {d.bellcranks.map((b, i) => (
+                  <Fragment key={i}>
+                    <PlaneLine t={t} points={b.arc} stroke={INK.construction} width={1} dash={[3, 3]} />
+                    <PlaneLine t={t} points={b.arm} stroke={faultColour(part, "bellcrank", INK.arm)} width={4} opacity={0.8} />
+                    <PlaneDot t={t} at={b.pivot} radiusPx={3.5} fill="#ffffff" stroke={faultColour(part, "bellcrank", INK.arm)} width={2} />
+                  </Fragment>
+                ))}
                 <Wheel t={t} w={d.left} neckMm={layout.drive.neckDiameterMm} part={part} shaftColour={shaftColour} />
                 <Wheel t={t} w={d.right} neckMm={layout.drive.neckDiameterMm} part={null} shaftColour={INK.shaft} />
                 {show.dimensions ? (

@@ -24,9 +24,9 @@ export function bindingText(b: PreviewBinding): string | null {
     case "joint":
       return `Binds (${b.wheel} wheel): ${limitLabel(b.by)} at ${fmt(b.limitDeg, 1, "°")} — joint at ${fmt(b.angleDeg, 1, "°")}`;
     case "tie-rod":
-      return `Binds (${b.wheel} wheel): the tie rod cannot reach the steering arm here`;
-    case "rack-end":
-      return "End of rack travel";
+      return `Binds (${b.wheel} wheel): the tie rod is over centre (in line with the steering arm) here`;
+    case "input-end":
+      return `End of ${b.input} travel`;
     default:
       return null;
   }
@@ -35,7 +35,7 @@ export function bindingText(b: PreviewBinding): string | null {
 export function BindingNote({ binding }: { binding: PreviewBinding }) {
   const text = bindingText(binding);
   if (!text) return null;
-  const tone = binding.kind === "rack-end" ? "text-ink bg-white/90" : "text-red-800 bg-red-50/95";
+  const tone = binding.kind === "input-end" ? "text-ink bg-white/90" : "text-red-800 bg-red-50/95";
   return <p className={`mt-0.5 rounded px-1.5 py-0.5 font-medium ${tone}`} data-testid="view-binding">{text}</p>;
 }
 
@@ -53,7 +53,7 @@ export function StaticGhost({ t, layout, view }: { t: ViewTransform; layout: Lay
   }
   const tv = layout.topView;
   const ball = topOf([tv.steeringArmBall.x, tv.steeringArmBall.y, 0]);
-  const rack = topOf([tv.rackEnd.x, tv.rackEnd.y, 0]);
+  const inner = topOf([tv.tieRodInner.x, tv.tieRodInner.y, 0]);
   const wheel = topOf([0, f.wheelCentre.y, 0]);
-  return <PlaneLine t={t} points={[rack, ball, wheel]} stroke={INK.ghost} width={1} dash={[3, 3]} />;
+  return <PlaneLine t={t} points={[inner, ball, wheel]} stroke={INK.ghost} width={1} dash={[3, 3]} />;
 }

@@ -9,6 +9,8 @@ import type { SourceStatus } from "../provenance";
 
 export interface Citation {
   readonly key: string;
+  /** A few words for a link: author or publisher and title. */
+  readonly short: string;
   /** The full citation as one line of text. */
   readonly text: string;
   /** What the product takes from it. */
@@ -17,7 +19,41 @@ export interface Citation {
   readonly status: SourceStatus;
 }
 
-const c = (key: string, status: SourceStatus, text: string, usedFor: string, url?: string): Citation => ({ key, status, text, usedFor, ...(url ? { url } : {}) });
+const SHORT_NAMES: Readonly<Record<string, string>> = {
+  "iso-8855-2011": "ISO 8855:2011",
+  "sae-j670-2008": "SAE J670 (JAN2008)",
+  "barton-fieldhouse-2018": "Barton & Fieldhouse, Automotive Chassis Engineering",
+  "super7thheaven-caster": "Super 7th Heaven glossary, caster angle",
+  "norton-dom-5e": "Norton, Design of Machinery, 5th ed., ch. 4",
+  "ghosal-2010": "Ghosal, The Freudenstein Equation (2010)",
+  "suspensionsecrets-ic": "Suspension Secrets, instantaneous centre",
+  "milliken-rcvd-1995": "Milliken & Milliken, Race Car Vehicle Dynamics",
+  "jazar-vd-2e": "Jazar, Vehicle Dynamics, 2nd ed., ch. 7",
+  "gillespie-fvd-1992": "Gillespie, Fundamentals of Vehicle Dynamics, ch. 6",
+  "racecar-engineering-ackermann": "Racecar Engineering, Ackermann steering geometry",
+  "shigley-mde-9e": "Shigley's Mechanical Engineering Design, 9th ed., §5-5",
+  "shigley-mde-9e-torsion": "Shigley's Mechanical Engineering Design, 9th ed., ch. 3",
+  "amesweb-torsion": "AmesWeb, torsional stress formula",
+  "roark-7e": "Roark's Formulas for Stress and Strain, 7th ed.",
+  "motor-constants": "Wikipedia, Motor constants",
+  "simscape-universal-joint": "MathWorks Simscape Driveline, Universal Joint",
+  "uicker-tmm": "Uicker, Pennock & Shigley, Theory of Machines and Mechanisms",
+  "cv-joint-wikipedia": "Wikipedia, Constant-velocity joint",
+  "sallei-universal-joint": "Sallei, The universal joint",
+  "efunda-aisi-4140": "efunda, AISI 4140",
+  "szfco-s45c": "Materials database extract, S45C / AISI 1045",
+  "jis-g4051": "JIS G4051",
+  "substech-7075": "SubsTech, 7075",
+  "amesweb-7075": "AmesWeb, 7075 (MMPDS)",
+  "additive-tools-pla": "additive.tools, PLA",
+  "additive-tools-petg": "additive.tools, PETG",
+  "additive-tools-pa12-cf": "additive.tools, PA12-CF",
+  "babis-2025-pa12cf": "Babiș et al., Technologies 2025",
+  "derived-here": "Derived for this product",
+  "common-practice": "Common practice",
+};
+
+const c = (key: string, status: SourceStatus, text: string, usedFor: string, url?: string): Citation => ({ key, short: SHORT_NAMES[key] ?? key, status, text, usedFor, ...(url ? { url } : {}) });
 
 export const CITATIONS: readonly Citation[] = [
   c("iso-8855-2011", "recalled", "ISO 8855:2011, Road vehicles — Vehicle dynamics and road-holding ability — Vocabulary. International Organization for Standardization, 2011. Clause numbers not checked; the wording on this page is ours.", "The vehicle axis system (x forward, y left, z up) and the names of the steering-axis figures."),
