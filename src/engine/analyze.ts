@@ -16,7 +16,7 @@ import { GeometryError } from "./errors";
 import type { KitLayout, KitMaterial } from "./kit-layout";
 import { radToDeg } from "./math/angle";
 import { ackermannInnerReferencePercent, ackermannOuterReferencePercent, ackermannTurnCentrePercent } from "./steering/ackermann";
-import { steerLockOnRow, toggleOnRow, type LockInputs } from "./steering/steer-lock";
+import { steerLockOnRow, toggleBracketOnRow, type LockInputs } from "./steering/steer-lock";
 import { steeringStop } from "./steering/steering-stop";
 import { steerAxisFigures } from "./steering/steer-axis";
 import { analyzeStrength, materialById, type MaterialFigure, type StrengthResult } from "./strength/index";
@@ -145,7 +145,7 @@ export function analyzeLayout(layout: KitLayout, options: AnalyzeOptions = {}): 
   const travelOut: TravelStepResult[] = [];
   const perTravel: AnalysisResult["steerLock"]["perTravel"][number][] = [];
   const rows: CornerRow[] = [];
-  const toggles: (number | null)[] = [];
+  const toggles: ReturnType<typeof toggleBracketOnRow>[] = [];
   const envJoint: (number | null)[][] = [];
   const envRoad: (number | null)[][] = [];
   const buffers = rowGridBuffers(nS);
@@ -162,7 +162,7 @@ export function analyzeLayout(layout: KitLayout, options: AnalyzeOptions = {}): 
     const lock = steerLockOnRow(row, g, lockInputs, scratch, warnings);
     rows.push(row);
     perTravel.push(lock);
-    toggles.push(toggleOnRow(row, g, lockInputs, scratch));
+    toggles.push(toggleBracketOnRow(g, lockInputs));
     const jRow: (number | null)[] = new Array(nS);
     const rRow: (number | null)[] = new Array(nS);
     const lockU = Math.abs(lock.steerInput);

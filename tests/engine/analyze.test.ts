@@ -159,7 +159,8 @@ describe("named errors, never NaN", () => {
   });
 });
 
-describe("properties over random layouts near the demo (fast-check)", () => {
+// Many analyses each: on a loaded 2-core machine these take seconds, so they get room (not a speed check).
+describe("properties over random layouts near the demo (fast-check)", { timeout: 60_000 }, () => {
   it("no valid layout gives NaN or Infinity: it analyses with finite numbers or throws a GeometryError", () => {
     fc.assert(
       fc.property(layoutNearDemo, (layout) => {

@@ -161,8 +161,10 @@ export function evalPointBasis(row: CornerRow, p1: number, p2: number, ctx: Cont
 
 /** Solves one input position q (rack mm or bellcrank degrees) on one row; false where the tie rod cannot reach. */
 export function evalPoint(row: CornerRow, q: number, ctx: Context, out: PointScratch): boolean {
-  const [p1, p2] = inputBasis(row.lk.kind, q);
-  return evalPointBasis(row, p1, p2, ctx, out);
+  // inputBasis written out, so a search calling this many times allocates nothing.
+  if (row.lk.kind === "rack") return evalPointBasis(row, q, q * q, ctx, out);
+  const t = (q * Math.PI) / 180;
+  return evalPointBasis(row, Math.cos(t) - 1, Math.sin(t), ctx, out);
 }
 
 /** The input grid: positions from −travel to +travel and their basis values (computed once for all rows). */

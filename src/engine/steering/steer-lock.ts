@@ -60,27 +60,35 @@ export function lockToggleBisect(row: CornerRow, sg: number, lo: number, hi: num
   return lo;
 }
 
-/** Grid sample indices of the walk from centre in the left-turn direction: inner (jIn) and its mirror (jOut), with u = sg·value[jIn] > 0. */
-function* walk(li: LockInputs): Generator<{ jIn: number; jOut: number; u: number }> {
+/**
+ * The walk from centre in the left-turn direction over the grid samples: step k has the inner sample
+ * walkInner(li, k) and its mirror n − 1 − that, at u = sg·value > 0 (samples at or behind centre are skipped
+ * by the callers' u > 0 test). Plain loops, not a generator: this runs on every travel row.
+ */
+function walkSteps(li: LockInputs): number {
+  const n = li.grid.values.length;
+  return n - (n >> 1);
+}
+
+function walkInner(li: LockInputs, step: number): number {
   const n = li.grid.values.length;
   const half = n >> 1;
-  const sg = li.leftTurnSign;
-  for (let step = 0; step < n - half; step++) {
-    const jIn = sg > 0 ? half + step : n - 1 - half - step;
-    const u = sg * li.grid.values[jIn];
-    if (!(u > 1e-12)) continue;
-    yield { jIn, jOut: n - 1 - jIn, u };
-  }
+  return li.leftTurnSign > 0 ? half + step : n - 1 - half - step;
 }
 
 /**
- * Where the tie rod goes over centre on this row, within the input's travel (u > 0, left turn), or null
- * when it reaches all the way: bracketed on the grid samples, then bisected.
+ * The first grid step of the walk at which the tie rod no longer reaches on this row (either wheel), with
+ * the u before it and at it, or null when it reaches all the way. Bisect between them (lockToggleBisect)
+ * for the toggle itself; only the rows with the earliest step need it.
  */
-export function toggleOnRow(row: CornerRow, grid: RowGrid, li: LockInputs, scratch: PointScratch): number | null {
+export function toggleBracketOnRow(grid: RowGrid, li: LockInputs): { readonly step: number; readonly lo: number; readonly hi: number } | null {
+  const n = li.grid.values.length;
   let prevU = 0;
-  for (const { jIn, jOut, u } of walk(li)) {
-    if (Number.isNaN(grid.joint[jIn]) || Number.isNaN(grid.joint[jOut])) return lockToggleBisect(row, li.leftTurnSign, prevU, u, li.ctx, scratch);
+  for (let step = 0, steps = walkSteps(li); step < steps; step++) {
+    const jIn = walkInner(li, step);
+    const u = li.leftTurnSign * li.grid.values[jIn];
+    if (!(u > 1e-12)) continue;
+    if (Number.isNaN(grid.joint[jIn]) || Number.isNaN(grid.joint[n - 1 - jIn])) return { step, lo: prevU, hi: u };
     prevU = u;
   }
   return null;
@@ -104,10 +112,14 @@ export function steerLockOnRow(row: CornerRow, grid: RowGrid, li: LockInputs, sc
     reason = li.jointLimitBy;
     warnings?.push(`drive joint: ${first.toFixed(1)}° already exceeds its ${jointLimitDeg.toFixed(1)}° limit with the wheels straight at ${describeTravel(row.travelMm)}`);
   } else {
+    const n = li.grid.values.length;
     let prevU = 0;
-    for (const { jIn, jOut, u } of walk(li)) {
+    for (let step = 0, steps = walkSteps(li); step < steps; step++) {
+      const jIn = walkInner(li, step);
+      const u = sg * li.grid.values[jIn];
+      if (!(u > 1e-12)) continue;
       const a = grid.joint[jIn];
-      const b = grid.joint[jOut];
+      const b = grid.joint[n - 1 - jIn];
       if (Number.isNaN(a) || Number.isNaN(b)) {
         // The tie rod stops reaching between prevU and u: find the last point that solves, then check the
         // joint on the way there.

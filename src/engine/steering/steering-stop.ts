@@ -3,7 +3,8 @@
  * tie rod's toggle binds before the end of the steering input's travel, the linkage would still drive the
  * wheel further if the input could go further, and the part breaks: a stop must keep the input short of
  * the limit at every suspension travel. The limit comes earliest along the input at one travel (the worst
- * travel): found on the analysis's travel rows, then refined between them by golden-section search. The
+ * travel): found on the analysis's travel rows, then refined between them by golden-section search (at an
+ * end row only where a parabola through the last three rows says the extreme lies inside). The
  * stop is proposed a margin short of it (degrees of the inner road wheel at the worst travel), and the
  * margins it leaves are checked over the whole travel range: the joint angle still free before the limit
  * and, for a plain cup, the neck's gap to the mouth rim.
@@ -12,7 +13,7 @@ import type { SteerLockResult, SteeringStopResult } from "../analysis-result";
 import { cornerRowAtTravel, evalPoint, type CornerModel, type CornerRow, type PointScratch } from "../envelope/corner-row";
 import { minimizeGolden } from "../math/minimize";
 import { rootBracketIllinois } from "../math/root-find";
-import { lockJointAt, lockResultAt, steerLockNear, type LockInputs } from "./steer-lock";
+import { lockJointAt, lockResultAt, lockToggleBisect, steerLockNear, type LockInputs } from "./steer-lock";
 
 export interface StopInputs {
   readonly model: CornerModel;
@@ -20,8 +21,8 @@ export interface StopInputs {
   /** The analysis's travel rows and the lock found on each. */
   readonly rows: readonly CornerRow[];
   readonly locks: readonly SteerLockResult[];
-  /** Where the tie rod toggles on each row within the travel (left-turn input), null where it does not. */
-  readonly toggles: readonly (number | null)[];
+  /** Where the tie rod stops reaching on each row, as a grid bracket (steer-lock.ts toggleBracketOnRow), null where it reaches all the way. */
+  readonly toggles: readonly ({ readonly step: number; readonly lo: number; readonly hi: number } | null)[];
   /** Set-back of the proposed stop, degrees of inner road-wheel angle. */
   readonly marginDeg: number;
   /** Neck-to-mouth gap at a joint angle (degrees), mm; null for a slotted cup. */
@@ -32,8 +33,40 @@ export interface StopInputs {
 /** Travel precision of the refinement between rows, mm. */
 const TRAVEL_TOL_MM = 1e-4;
 
-function neighbours(rows: readonly CornerRow[], i: number): [number, number] {
-  return [rows[Math.max(0, i - 1)]!.travelMm, rows[Math.min(rows.length - 1, i + 1)]!.travelMm];
+/**
+ * The smallest of g over the travel range, given its values on the rows (smallest at row i): refined by
+ * golden-section search between row i's neighbours. At an end row the search runs only when the parabola
+ * through the three end rows has its minimum inside the end interval: a g still falling towards the end of
+ * travel has its minimum there, and the rows already hold it (each refinement costs a travel solve per step).
+ */
+function refineMin(rows: readonly CornerRow[], values: readonly number[], i: number, g: (t: number) => number): { x: number; fx: number } {
+  const n = rows.length;
+  const t = (k: number) => rows[k]!.travelMm;
+  const atRow = { x: t(i), fx: values[i]! };
+  if (n < 2 || !Number.isFinite(atRow.fx)) return atRow;
+  let lo: number;
+  let hi: number;
+  if (i > 0 && i < n - 1) {
+    lo = t(i - 1);
+    hi = t(i + 1);
+  } else {
+    const k1 = i === 0 ? 1 : n - 2;
+    if (n >= 3) {
+      const k2 = i === 0 ? 2 : n - 3;
+      const [x0, x1, x2] = [t(i), t(k1), t(k2)];
+      const [y0, y1, y2] = [values[i]!, values[k1]!, values[k2]!];
+      // Vertex of the parabola through the three points; its curvature sign says minimum or maximum.
+      const d = (x0 - x1) * (x0 - x2) * (x1 - x2);
+      const a = (x2 * (y1 - y0) + x1 * (y0 - y2) + x0 * (y2 - y1)) / d;
+      const b = (x2 * x2 * (y0 - y1) + x1 * x1 * (y2 - y0) + x0 * x0 * (y1 - y2)) / d;
+      const vertex = -b / (2 * a);
+      if (!(a > 0 && (vertex - x0) * (vertex - x1) < 0)) return atRow;
+    }
+    lo = Math.min(t(i), t(k1));
+    hi = Math.max(t(i), t(k1));
+  }
+  const r = minimizeGolden(g, lo, hi, TRAVEL_TOL_MM);
+  return r.fx < atRow.fx ? r : atRow;
 }
 
 /** The inner road-wheel angle at left-turn input u on a row, degrees. */
@@ -45,19 +78,13 @@ function innerAt(row: CornerRow, sg: number, u: number, s: StopInputs): number {
 function worstJointAt(u: number, s: StopInputs): { jointDeg: number; travelMm: number } {
   const { li, rows, model, scratch } = s;
   const sg = li.leftTurnSign;
+  const neg = rows.map((row) => -lockJointAt(row, sg, u, li.ctx, scratch));
   let best = 0;
-  let jMax = -Infinity;
-  rows.forEach((row, i) => {
-    const j = lockJointAt(row, sg, u, li.ctx, scratch);
-    if (j > jMax) {
-      jMax = j;
-      best = i;
-    }
+  neg.forEach((v, i) => {
+    if (v < neg[best]!) best = i;
   });
-  if (rows.length < 2 || jMax === Infinity) return { jointDeg: jMax, travelMm: rows[best]!.travelMm };
-  const [a, b] = neighbours(rows, best);
-  const r = minimizeGolden((t) => -lockJointAt(cornerRowAtTravel(model, t), sg, u, li.ctx, scratch), a, b, TRAVEL_TOL_MM);
-  return -r.fx > jMax ? { jointDeg: -r.fx, travelMm: r.x } : { jointDeg: jMax, travelMm: rows[best]!.travelMm };
+  const r = refineMin(rows, neg, best, (t) => -lockJointAt(cornerRowAtTravel(model, t), sg, u, li.ctx, scratch));
+  return { jointDeg: -r.fx, travelMm: r.x };
 }
 
 /** The steering stop (see the module comment). */
@@ -74,9 +101,9 @@ export function steeringStop(s: StopInputs): SteeringStopResult {
   let worst: SteerLockResult = locks[wi]!;
   let worstRow: CornerRow = rows[wi]!;
   if (Math.abs(worst.steerInput) > 0 && rows.length > 1) {
-    const [a, b] = neighbours(rows, wi);
     const hint = Math.abs(worst.steerInput);
-    const r = minimizeGolden((t) => Math.abs(steerLockNear(cornerRowAtTravel(model, t), li, scratch, hint).steerInput), a, b, TRAVEL_TOL_MM);
+    const lockU = locks.map((l) => Math.abs(l.steerInput));
+    const r = refineMin(rows, lockU, wi, (t) => Math.abs(steerLockNear(cornerRowAtTravel(model, t), li, scratch, hint).steerInput));
     if (r.fx < hint) {
       worstRow = cornerRowAtTravel(model, r.x);
       worst = steerLockNear(worstRow, li, scratch, hint);
@@ -92,9 +119,17 @@ export function steeringStop(s: StopInputs): SteeringStopResult {
     }
   }
 
-  const toggleRows = s.toggles.map((u, i) => (u === null ? null : { u, travelMm: rows[i]!.travelMm })).filter((x) => x !== null);
-  const firstToggle = toggleRows.reduce<{ u: number; travelMm: number } | null>((m, x) => (m === null || x.u < m.u ? x : m), null);
-  const toggle = firstToggle ? { steerInput: sg * firstToggle.u, travelMm: firstToggle.travelMm } : null;
+  // The toggle: bisected only on the rows where the tie rod stops reaching at the earliest grid step.
+  let firstStep = Infinity;
+  for (const b of s.toggles) if (b && b.step < firstStep) firstStep = b.step;
+  let firstToggle: { u: number; travelMm: number } | null = null;
+  s.toggles.forEach((b, i) => {
+    if (!b || b.step !== firstStep) return;
+    const u = lockToggleBisect(rows[i]!, sg, b.lo, b.hi, li.ctx, scratch);
+    if (!firstToggle || u < firstToggle.u) firstToggle = { u, travelMm: rows[i]!.travelMm };
+  });
+  const found = firstToggle as { u: number; travelMm: number } | null;
+  const toggle = found ? { steerInput: sg * found.u, travelMm: found.travelMm } : null;
 
   const limitU = Math.abs(worst.steerInput);
   const needed = worst.limitedBy !== "input-travel";

@@ -51,7 +51,8 @@ function lockByPoses(poser: CornerPoser, a: AnalysisResult, travelMm: number): n
   return end;
 }
 
-describe("the steering stop of each demo kit", () => {
+// A fine grid of poses per kit: seconds on a loaded machine, so room to finish (not a speed check).
+describe("the steering stop of each demo kit", { timeout: 60_000 }, () => {
   it.each(DEMO_LAYOUTS.map((d) => [d.key, d.layout] as const))("%s: needs a stop, at the limit of the worst travel; no travel passes the limit at the stop (fine grid)", (_, layout) => {
     const a = analyzeLayout(layout, GRID);
     const s = a.steeringStop;
@@ -165,7 +166,7 @@ describe("no stop can help a joint past its limit with the wheels straight", () 
   });
 });
 
-describe("over random layouts near the demo (fast-check)", () => {
+describe("over random layouts near the demo (fast-check)", { timeout: 60_000 }, () => {
   it("no travel row passes the joint limit or the toggle at the proposed stop", () => {
     fc.assert(
       fc.property(layoutNearDemo, (layout) => {
