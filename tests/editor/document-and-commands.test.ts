@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
-import { TARNWICK_10_BASE } from "@/contracts/demo-layouts";
+import { TARNWICK_10_BASE, TARNWICK_10_BELLCRANK } from "@/contracts/demo-layouts";
 import { layoutFieldsSchema } from "@/contracts/layout";
 import { moveHandle, nudgeHandle, setNeckDiameter } from "@/editor/commands/edit-commands";
-import { handleById, handlePlanePoint, HANDLES } from "@/editor/document/handles";
+import { handleById, handlePlanePoint, HANDLES, handlesOf } from "@/editor/document/handles";
 import { ALL_FIELDS, fieldRange } from "@/editor/document/layout-fields";
 import { getAt, setAt } from "@/editor/document/layout-paths";
 
@@ -29,7 +29,12 @@ describe("handles", () => {
       expect(Number.isFinite(u) && Number.isFinite(v), h.id).toBe(true);
     }
     expect(HANDLES.filter((h) => h.view === "front").map((h) => h.id.split(":")[1])).toEqual(["lowerInner", "lowerOuter", "upperInner", "upperOuter", "wheelCentre", "inboardJoint", "outboardJoint"]);
-    expect(HANDLES.filter((h) => h.view === "top").map((h) => h.id.split(":")[1])).toEqual(["steeringArmBall", "rackEnd", "inboardJoint", "outboardJoint"]);
+    expect(handlesOf("top", TARNWICK_10_BASE).map((h) => h.id.split(":")[1])).toEqual(["steeringArmBall", "tieRodInner", "inboardJoint", "outboardJoint"]);
+    // A bellcrank's pivot is a point of the layout only with a bellcrank input, and then it has a handle.
+    expect(handlesOf("top", TARNWICK_10_BELLCRANK).map((h) => h.id.split(":")[1])).toEqual(["steeringArmBall", "tieRodInner", "bellcrankPivot", "inboardJoint", "outboardJoint"]);
+    expect(handlePlanePoint(TARNWICK_10_BELLCRANK, handleById("top:bellcrankPivot")!)).toEqual([35, 5]);
+    const moved = moveHandle(TARNWICK_10_BELLCRANK, "top:bellcrankPivot", 33, 7);
+    expect(moved.topView.steeringInput).toEqual({ kind: "bellcrank", pivot: { x: -7, y: 33 }, travelDeg: 25 });
   });
 
   it("the top view draws forward down the screen: plane v = −x", () => {
