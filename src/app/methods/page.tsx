@@ -27,7 +27,7 @@ export default function MethodsPage() {
       </p>
       <h1 className="mt-2 text-3xl font-semibold tracking-tight text-steel">Methods and sources</h1>
       <p className="mt-3 leading-relaxed text-ink">
-        How every figure on a kit's page and in the analysis API is worked out: its definition, formula, unit, sign
+        How every figure on a kit&apos;s page and in the analysis API is worked out: its definition, formula, unit, sign
         convention and valid range, and the sources it rests on. Each entry and each source has a stable address
         (this page, <code>#</code> and its key): the readouts link here, and every source the API names is one of
         the keys below.
