@@ -1,6 +1,6 @@
 "use client";
 // Inner against outer road-wheel angle of the linkage (analysis.steering.steps at ride height), beside
-// the ideal 100 % Ackermann curve, cot δo − cot δi = w/L (REFERENCES §2.1), and parallel steer (0 %).
+// the ideal 100 % Ackermann curve, cot δo − cot δi = w/L (methods entry "ackermann"), and parallel steer (0 %).
 import { CartesianGrid, Line, LineChart, ReferenceDot, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import { ackermannIdealOuterDeg, type AnalysisResult } from "@/engine";
 import { PlotCard, PlotEmpty } from "./plot-card";
