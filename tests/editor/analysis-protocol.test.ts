@@ -37,12 +37,13 @@ describe("the worker's answer", () => {
     expect(reply.ok).toBe(false);
     if (reply.ok) return;
     expect(reply.fault).toMatchObject({ kind: "invalid", path: "drive.neckDiameterMm", part: "neck" });
-    expect(reply.fault.message).toMatch(/drive.neckDiameterMm must be at least 0.3 mm/);
+    // In the panel's words, not the contract's dotted path.
+    expect(reply.fault.message).toBe("Neck diameter must be at least 0.3 mm");
   });
 
   it("calls a neck wider than the mouth impossible, on the neck", () => {
     const reply = answerAnalysisRequest({ type: "analyze", id: 1, quality: "full", layout: setAt(TARNWICK_10_BASE, "drive.neckDiameterMm", 9) });
-    expect(!reply.ok && reply.fault).toMatchObject({ kind: "impossible", part: "neck", path: "drive.neckDiameterMm" });
+    expect(!reply.ok && reply.fault).toMatchObject({ kind: "impossible", part: "neck", path: "drive.neckDiameterMm", message: "Neck diameter must be smaller than cup mouth diameter" });
   });
 
   it("calls arms that cannot close impossible, naming the part", () => {
