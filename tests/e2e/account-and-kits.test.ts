@@ -81,6 +81,7 @@ describe("a kit's analysis sheet", () => {
     // The caution stands beside the strength figures, not only at the foot of the sheet.
     expect(await strength.innerText()).toMatch(/An estimate: printed parts vary with layer direction/);
     await page.getByRole("table", { name: "Neck diameter what-if" }).waitFor();
-    await page.getByText("Cautions").first().waitFor();
+    // The cautions at the foot of the sheet (exactly its heading: the figures' explanations also mention cautions).
+    await page.getByText("Cautions", { exact: true }).first().waitFor();
   });
 });
