@@ -4,7 +4,8 @@ import MethodsPage from "@/app/methods/page";
 import { OUTPUT_FIELDS, outputFieldCitations } from "@/engine/output-fields";
 import { CITATIONS } from "@/engine/methods/citations";
 
-describe("the methods page", () => {
+// The whole page rendered in jsdom: seconds on a loaded machine, so room to finish (not a speed check).
+describe("the methods page", { timeout: 30_000 }, () => {
   it("every output field's methods entry and every citation key of it is an anchor on the page, with the field listed in its entry", () => {
     const { container } = render(<MethodsPage />);
     const byId = new Map([...container.querySelectorAll("[id]")].map((e) => [e.id, e]));

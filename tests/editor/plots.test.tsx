@@ -127,7 +127,8 @@ function renderPlots(readOnly = false) {
   return { ...view, store: store! };
 }
 
-describe("the editor's plots", () => {
+// Rendering hundreds of svg cells in jsdom: seconds on a loaded machine, so room to finish (not a speed check).
+describe("the editor's plots", { timeout: 30_000 }, () => {
   it("the envelope tab draws one cell per solved grid point, the limit contour and no NaN", () => {
     const { container } = renderPlots();
     fireEvent.click(screen.getByTestId("tab-plot-tab-envelope"));

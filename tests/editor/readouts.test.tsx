@@ -20,7 +20,8 @@ function renderReadouts(layout: Layout, analysis: AnalysisResult, lengthUnit: "m
   );
 }
 
-describe("every readout explains itself and links its methods entry", () => {
+// The whole panel rendered in jsdom, with analyses: room to finish on a loaded machine (not a speed check).
+describe("every readout explains itself and links its methods entry", { timeout: 30_000 }, () => {
   it("each label is a link to /methods#key with the entry's one-line explanation, shown on focus and on hover, hidden by Escape", () => {
     renderReadouts(TARNWICK_10_BASE, BASE);
     const groups = readoutGroups(BASE, "mm");
@@ -55,7 +56,7 @@ describe("every readout explains itself and links its methods entry", () => {
   });
 });
 
-describe("the steering stop readouts", () => {
+describe("the steering stop readouts", { timeout: 30_000 }, () => {
   it("the baseline needs a stop: where, each side, how far the rack runs past the limit, and the margins at the stop", () => {
     renderReadouts(TARNWICK_10_BASE, BASE);
     const s = BASE.steeringStop;
@@ -101,7 +102,7 @@ describe("the steering stop readouts", () => {
   });
 });
 
-describe("figures that are blank or zero say why", () => {
+describe("figures that are blank or zero say why", { timeout: 30_000 }, () => {
   it("an Ackermann figure under the reporting angle is blank with the reason", () => {
     // A joint past its limit with the wheels straight at ride height: lock 0°, so no Ackermann at lock.
     const stuck: Layout = { ...TARNWICK_10_BASE, drive: { ...TARNWICK_10_BASE.drive, jointType: "cvd", ratedAngleDeg: 2, cupMouthDiameterMm: 20 } };
