@@ -13,6 +13,7 @@ export default function Home() {
       <div className="mt-8 flex gap-3">
         <Link href="/kits" className="rounded-md bg-steel px-4 py-2 text-sm font-medium text-white hover:bg-[#2f4a60]">Open your kits</Link>
         <Link href="/sign-up" className="rounded-md border border-ink/20 bg-white px-4 py-2 text-sm font-medium hover:bg-ink/5">Create an account</Link>
+        <Link href="/methods" className="rounded-md border border-ink/20 bg-white px-4 py-2 text-sm font-medium hover:bg-ink/5">Methods and sources</Link>
       </div>
       <section aria-labelledby="cautions" className="mt-12 rounded-lg border border-amber-300 bg-amber-50 p-4 text-sm text-amber-950">
         <h2 id="cautions" className="font-semibold">Cautions</h2>

@@ -2,12 +2,15 @@
  * Demo layouts: one invented 1:10 four-wheel-drive buggy, the "Tarnwick 10" (a name of our own, not a
  * real product), and a few variants a designer would try. Plausible 1:10 figures: track ≈ 245 mm,
  * wheelbase 280 mm, tyre radius 42 mm, caster 22°, kingpin inclination ≈ 10°, dogbone rated 30°.
+ * The rack throws ±6.5 mm: short of the tie rod's toggle (about 7.1 mm at full bump, 7.35 mm at ride
+ * height) with room to spare, and further than the drive joint allows, so each kit gets the steering stop
+ * the analysis proposes (as a servo's end points or a stop on the rack would give it).
  */
 import type { Layout } from "./layout";
 
 /** The baseline: 5.0 mm steel dogbone neck in a closed 8 mm cup, 4140 steel, brushless 4000 Kv at 80 A. */
 export const TARNWICK_10_BASE: Layout = {
-  schema: 1,
+  schema: 2,
   frontView: {
     lowerInner: { y: 30, z: 24 },
     lowerOuter: { y: 110, z: 23 },
@@ -23,8 +26,8 @@ export const TARNWICK_10_BASE: Layout = {
   sideView: { casterDeg: 22, casterOffsetMm: -5 },
   topView: {
     steeringArmBall: { x: -18, y: 100, z: 36 },
-    rackEnd: { x: -20, y: 35, z: 36 },
-    steeringInput: { kind: "rack", travelMm: 10 },
+    tieRodInner: { x: -20, y: 35, z: 36 },
+    steeringInput: { kind: "rack", travelMm: 6.5 },
     wheelbaseMm: 280,
   },
   drive: {
@@ -70,6 +73,15 @@ export const TARNWICK_10_CARDAN: Layout = {
   strength: { ...TARNWICK_10_BASE.strength, material: { kind: "catalogue", id: "al-7075-t6" } },
 };
 
+/**
+ * Bellcrank steering instead of the rack: each inner ball on a 15 mm arm pointing rearward from a pivot at
+ * (−5, 35) mm, turning ±25° (the inner ball moves about ±6.3 mm across, like the rack), 5.0 mm dogbone.
+ */
+export const TARNWICK_10_BELLCRANK: Layout = {
+  ...TARNWICK_10_BASE,
+  topView: { ...TARNWICK_10_BASE.topView, steeringInput: { kind: "bellcrank", pivot: { x: -5, y: 35 }, travelDeg: 25 } },
+};
+
 /** The demo variants by key, with a short label for kit names. */
 export const DEMO_LAYOUTS: readonly { readonly key: string; readonly name: string; readonly layout: Layout }[] = [
   { key: "tarnwick-10-base", name: "Tarnwick 10 — 5.0 mm steel dogbone", layout: TARNWICK_10_BASE },
@@ -77,4 +89,5 @@ export const DEMO_LAYOUTS: readonly { readonly key: string; readonly name: strin
   { key: "tarnwick-10-cvd", name: "Tarnwick 10 — CVD 4.5 mm", layout: TARNWICK_10_CVD },
   { key: "tarnwick-10-printed", name: "Tarnwick 10 — printed PA12-CF, slotted cup", layout: TARNWICK_10_PRINTED },
   { key: "tarnwick-10-cardan", name: "Tarnwick 10 — single cardan, hollow 7075", layout: TARNWICK_10_CARDAN },
+  { key: "tarnwick-10-bellcrank", name: "Tarnwick 10 — bellcrank steering", layout: TARNWICK_10_BELLCRANK },
 ];

@@ -10,7 +10,7 @@ import { shelfRefsSchema } from "./shelf-refs";
 import { isStorableText, storableTextMessage } from "./text";
 
 /** Current version of the layout document. */
-export const LAYOUT_SCHEMA_VERSION = 1 as const;
+export const LAYOUT_SCHEMA_VERSION = 2 as const;
 
 function bounded(field: string, unit: string, min: number, max: number) {
   const u = unit ? ` ${unit}` : "";
@@ -59,18 +59,32 @@ const sideViewSchema = z.strictObject({
     .describe("Kingpin axis x at wheel-centre height, mm ahead of the wheel centre; absent = 0"),
 });
 
-const steeringInputSchema = z.discriminatedUnion("kind", [
-  z.strictObject({
-    kind: z.literal("rack"),
-    travelMm: bounded("topView.steeringInput.travelMm", "mm", 0.5, 100).describe("Rack travel each way from centre"),
-  }),
-]);
+const steeringInputSchema = z.discriminatedUnion(
+  "kind",
+  [
+    z.strictObject({
+      kind: z.literal("rack"),
+      travelMm: bounded("topView.steeringInput.travelMm", "mm", 0.5, 100).describe("Rack travel each way from centre"),
+    }),
+    z.strictObject({
+      kind: z.literal("bellcrank"),
+      pivot: z
+        .strictObject({ x: COORD_X("topView.steeringInput.pivot.x"), y: COORD_Y("topView.steeringInput.pivot.y") })
+        .describe("Bellcrank pivot (vertical axis), mm"),
+      travelDeg: bounded("topView.steeringInput.travelDeg", "°", 0.5, 80).describe("Bellcrank travel each way from centre, + counter-clockwise from above"),
+    }),
+  ],
+  { error: "topView.steeringInput.kind must be rack or bellcrank" },
+);
 
 const topViewSchema = z.strictObject({
   steeringArmBall: pointXYZ("topView.steeringArmBall").describe("Steering arm ball at static; z absent = wheel-centre height"),
-  rackEnd: pointXYZ("topView.rackEnd").describe("Tie-rod inner ball at centre rack; z absent = the arm ball's height"),
+  tieRodInner: pointXYZ("topView.tieRodInner").describe("Tie-rod inner ball (rack end or bellcrank arm) with the steering centred; z absent = the arm ball's height"),
   steeringInput: steeringInputSchema,
   wheelbaseMm: bounded("topView.wheelbaseMm", "mm", 50, 5000),
+  stopMarginDeg: bounded("topView.stopMarginDeg", "°", 0, 10)
+    .optional()
+    .describe("How far short of the binding limit the proposed steering stop sits, degrees of inner road-wheel angle; absent = 1"),
 });
 
 /** Shear allowable rules: S_y/√3 (distortion energy) or S_y/2 (maximum shear, Tresca). */
@@ -174,11 +188,17 @@ export const layoutSchema = layoutObjectSchema.superRefine((l, ctx) => {
   if (d.slottedCup && d.slotLimitDeg === undefined) fail(["drive", "slotLimitDeg"], "drive.slotLimitDeg is required when drive.slottedCup is true");
   if (!(d.outboardJoint.y > d.inboardJoint.y)) fail(["drive", "outboardJoint", "y"], "drive.outboardJoint.y must be outboard of drive.inboardJoint.y", "drive shaft");
   const t = l.topView;
-  if (!(t.rackEnd.y >= 0)) fail(["topView", "rackEnd", "y"], "topView.rackEnd.y must be ≥ 0 (the left rack end)");
-  const dx = t.steeringArmBall.x - t.rackEnd.x;
-  const dy = t.steeringArmBall.y - t.rackEnd.y;
-  const dz = (t.steeringArmBall.z ?? f.wheelCentre.z) - (t.rackEnd.z ?? t.steeringArmBall.z ?? f.wheelCentre.z);
-  if (!(Math.hypot(dx, dy, dz) > 1)) fail(["topView", "rackEnd"], "topView.rackEnd must be at least 1 mm from topView.steeringArmBall (the tie rod has a length)", "tie rod");
+  if (!(t.tieRodInner.y >= 0)) fail(["topView", "tieRodInner", "y"], "topView.tieRodInner.y must be ≥ 0 (the left corner's tie rod)");
+  const dx = t.steeringArmBall.x - t.tieRodInner.x;
+  const dy = t.steeringArmBall.y - t.tieRodInner.y;
+  const dz = (t.steeringArmBall.z ?? f.wheelCentre.z) - (t.tieRodInner.z ?? t.steeringArmBall.z ?? f.wheelCentre.z);
+  if (!(Math.hypot(dx, dy, dz) > 1)) fail(["topView", "tieRodInner"], "topView.tieRodInner must be at least 1 mm from topView.steeringArmBall (the tie rod has a length)", "tie rod");
+  if (t.steeringInput.kind === "bellcrank") {
+    const p = t.steeringInput.pivot;
+    if (!(Math.hypot(t.tieRodInner.x - p.x, t.tieRodInner.y - p.y) >= 1)) {
+      fail(["topView", "steeringInput", "pivot"], "topView.steeringInput.pivot must be at least 1 mm (in plan) from topView.tieRodInner (the bellcrank arm has a length)", "bellcrank");
+    }
+  }
 });
 
 /** A parsed, valid layout (latest version). */
@@ -216,6 +236,20 @@ export function layoutDocumentVersion(doc: unknown): number | null {
 }
 
 /**
+ * Schema 1 → 2. Schema 2 added the bellcrank steering input and renamed the tie-rod inner ball
+ * `topView.rackEnd` → `topView.tieRodInner` (it sits on a bellcrank arm too); nothing else changed, so a
+ * schema 1 document analyses exactly as before.
+ */
+function upgradeFrom1(doc: Record<string, unknown>): Record<string, unknown> {
+  let topView = doc.topView;
+  if (isRecord(topView) && "rackEnd" in topView && !("tieRodInner" in topView)) {
+    const { rackEnd, ...rest } = topView;
+    topView = { ...rest, tieRodInner: rackEnd };
+  }
+  return { ...doc, schema: 2, topView };
+}
+
+/**
  * Schema 0 → 1. Schema 0 (no `schema` field) kept caster in the front view (`frontView.casterDeg`,
  * `frontView.casterOffsetMm`), the rack travel as a bare number (`topView.rackTravelMm`) and one overall
  * gear ratio (`strength.gearRatio`). Anything else is carried over unchanged for the schema to judge.
@@ -242,7 +276,7 @@ function upgradeFrom0(doc: Record<string, unknown>): Record<string, unknown> {
   return { ...doc, schema: 1, frontView, sideView: isRecord(doc.sideView) ? doc.sideView : sideView, topView, strength };
 }
 
-const UPGRADES: Record<number, (doc: Record<string, unknown>) => Record<string, unknown>> = { 0: upgradeFrom0 };
+const UPGRADES: Record<number, (doc: Record<string, unknown>) => Record<string, unknown>> = { 0: upgradeFrom0, 1: upgradeFrom1 };
 
 /**
  * Brings a stored document of any known version up to the latest shape, one step at a time, without

@@ -11,7 +11,7 @@ export type LibrarySort = (typeof LIBRARY_SORTS)[number];
 export const LIBRARY_STATUSES = ["active", "archived", "all"] as const;
 export const LIBRARY_VERDICTS = ["any", "meets", "misses"] as const;
 export const LIBRARY_PAGE_SIZES = [10, 25, 50, 100] as const;
-export const LOCK_LIMITS: readonly SteerLimitReason[] = ["neck-contact", "slot-limit", "rated-angle", "linkage", "rack-travel"];
+export const LOCK_LIMITS: readonly SteerLimitReason[] = ["neck-contact", "slot-limit", "rated-angle", "toggle", "input-travel"];
 
 /** "a,b,c" → ["a", "b", "c"], each judged by `item`; an empty string is no filter. */
 function csv<O>(item: z.ZodType<O, string>, field: string, max = 20) {

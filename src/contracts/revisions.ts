@@ -20,7 +20,7 @@ export interface RevisionSummary {
   /** ackermann.atLockPct (turn-centre form); null with too little steer to tell. */
   readonly ackermannPct: number | null;
   readonly safetyFactor: number;
-  /** drive.minNeckClearanceMm; null for a slotted cup. */
+  /** steeringStop.clearanceAtStopMm: the neck clearance at the proposed stop; null for a slotted cup. */
   readonly neckClearanceMm: number | null;
   readonly plungeMinMm: number;
   readonly plungeMaxMm: number;
@@ -31,11 +31,23 @@ export interface RevisionSummary {
   readonly rollCentreHeightMm: number | null;
 }
 
-/** As stored: the summary, or why the layout could not be analysed (it is kept all the same). */
-export type StoredSummary = ({ readonly ok: true } & RevisionSummary) | { readonly ok: false; readonly reason: string };
+/**
+ * The shape of analysis a summary was taken from (the engine's resultSchema). Migration recomputes any
+ * stored summary older than this, so the library never judges figures whose meaning has since changed.
+ */
+export const SUMMARY_ANALYSIS_SCHEMA = 2;
 
-export function summarizeAnalysis(a: AnalysisResult): RevisionSummary {
+/** As stored: the summary, or why the layout could not be analysed (it is kept all the same). */
+export type StoredSummary = (({ readonly ok: true } & RevisionSummary) | { readonly ok: false; readonly reason: string }) & { readonly analysisSchema?: number };
+
+/** A failed analysis as stored. */
+export function failedSummary(reason: string): StoredSummary {
+  return { ok: false, reason, analysisSchema: SUMMARY_ANALYSIS_SCHEMA };
+}
+
+export function summarizeAnalysis(a: AnalysisResult): RevisionSummary & { readonly analysisSchema: number } {
   return {
+    analysisSchema: a.resultSchema,
     lockDeg: a.steerLock.worst.innerDeg,
     lockOuterDeg: a.steerLock.worst.outerDeg,
     lockLimitedBy: a.steerLock.worst.limitedBy,
@@ -44,7 +56,7 @@ export function summarizeAnalysis(a: AnalysisResult): RevisionSummary {
     jointLimitDeg: a.drive.jointLimitDeg,
     ackermannPct: a.ackermann.atLockPct,
     safetyFactor: a.strength.safetyFactor,
-    neckClearanceMm: a.drive.minNeckClearanceMm,
+    neckClearanceMm: a.steeringStop.clearanceAtStopMm,
     plungeMinMm: a.drive.plungeMinMm,
     plungeMaxMm: a.drive.plungeMaxMm,
     camberStaticDeg: a.atStatic.camberDeg,

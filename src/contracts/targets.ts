@@ -13,7 +13,7 @@ export interface Targets {
   /** Ackermann at lock, turn-centre form, %: the range wanted. */
   readonly ackermannMinPct: number;
   readonly ackermannMaxPct: number;
-  /** Least neck-to-mouth clearance inside the lock, mm (a slotted cup has none to judge). */
+  /** Least neck-to-mouth clearance at the proposed steering stop, mm (a slotted cup has none to judge). */
   readonly minNeckClearanceMm: number;
 }
 

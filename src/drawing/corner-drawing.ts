@@ -102,10 +102,20 @@ export interface TopWheelDrawing {
   readonly roadWheelDeg: number;
 }
 
+/** A bellcrank in plan: its pivot, its arm to the tie-rod inner ball, and the arc the ball sweeps over the input's travel. */
+export interface TopBellcrankDrawing {
+  readonly pivot: PlanePoint;
+  readonly arm: readonly [PlanePoint, PlanePoint];
+  readonly arc: readonly PlanePoint[];
+}
+
 export interface TopDrawing {
   readonly left: TopWheelDrawing;
   readonly right: TopWheelDrawing;
-  readonly rack: readonly [PlanePoint, PlanePoint];
+  /** The rack between the two inner balls; null for a bellcrank input. */
+  readonly rack: readonly [PlanePoint, PlanePoint] | null;
+  /** Left and right bellcranks; empty for a rack. */
+  readonly bellcranks: readonly TopBellcrankDrawing[];
   /** Where the two wheel axes meet (plane point), null when parallel. */
   readonly turnCentre: PlanePoint | null;
   /** The rear axle line's plane v (= wheelbase, since v = −x). */
@@ -131,7 +141,7 @@ function topWheel(w: WheelPose, layout: Layout, reach: number): TopWheelDrawing 
     kingpinGround: topOf(w.kingpinGround),
     contactPatch: topOf(w.contactPatch),
     steeringArm: [topOf(w.kingpinGround), topOf(w.steeringArmBall)],
-    tieRod: [topOf(w.steeringArmBall), topOf(w.rackEnd)],
+    tieRod: [topOf(w.steeringArmBall), topOf(w.tieRodInner)],
     shaft: [topOf(w.inboardJoint), topOf(w.outboardJoint)],
     axisLine: [c, [c[0] + inboardDir[0] * reach, c[1] + inboardDir[1] * reach]],
     roadWheelDeg: w.roadWheelDeg,
@@ -152,13 +162,38 @@ export function topDrawing(pose: CornerPose, layout: Layout): TopDrawing {
   return {
     left: topWheel(pose.left, layout, reach),
     right: topWheel(pose.right, layout, reach),
-    rack: [topOf(pose.left.rackEnd), topOf(pose.right.rackEnd)],
+    rack: layout.topView.steeringInput.kind === "rack" ? [topOf(pose.left.tieRodInner), topOf(pose.right.tieRodInner)] : null,
+    bellcranks: bellcranksOf(pose, layout),
     turnCentre: meet ? [meet[1], -meet[0]] : null,
     rearAxleV: L,
     turnCentreAheadOfRearAxleMm: meet ? meet[0] + L : null,
     trailMm: w.kingpinGround[0] - w.contactPatch[0],
     steeringArmLengthMm: Math.hypot(armBall[1] - axisAtBall[0], -armBall[0] - axisAtBall[1]),
   };
+}
+
+/** The arc of the inner ball about the pivot over ± travelDeg, in plan (mirrored for the right side). */
+function bellcranksOf(pose: CornerPose, layout: Layout): TopBellcrankDrawing[] {
+  const si = layout.topView.steeringInput;
+  if (si.kind !== "bellcrank") return [];
+  const inner0: Vec3 = [layout.topView.tieRodInner.x, layout.topView.tieRodInner.y, 0];
+  const p = si.pivot;
+  const arcAt = (side: 1 | -1): PlanePoint[] => {
+    const pts: PlanePoint[] = [];
+    for (let k = 0; k <= 24; k++) {
+      const q = ((-si.travelDeg + (2 * si.travelDeg * k) / 24) * Math.PI) / 180;
+      const rx = inner0[0] - p.x;
+      const ry = inner0[1] - p.y;
+      const x = p.x + rx * Math.cos(q) - ry * Math.sin(q);
+      const y = p.y + rx * Math.sin(q) + ry * Math.cos(q);
+      pts.push(topOf([x, side * y, 0]));
+    }
+    return pts;
+  };
+  return (["left", "right"] as const).map((w, i) => {
+    const pivot = pose[w].bellcrankPivot!;
+    return { pivot: topOf(pivot), arm: [topOf(pivot), topOf(pose[w].tieRodInner)] as const, arc: arcAt(i === 0 ? 1 : -1) };
+  });
 }
 
 /** The top view's fitting box: both front wheels and the steering, the rear axle left out. */
@@ -172,6 +207,7 @@ export function topBox(layout: Layout): PlaneBox {
     // Ahead of the tyres, room for the figures set there (the arm and trail of the left wheel).
     [-outer, -r * 1.5],
     [t.steeringArmBall.y, -t.steeringArmBall.x],
-    [t.rackEnd.y, -t.rackEnd.x],
+    [t.tieRodInner.y, -t.tieRodInner.x],
+    ...(t.steeringInput.kind === "bellcrank" ? [[t.steeringInput.pivot.y, -t.steeringInput.pivot.x] as PlanePoint] : []),
   ])!;
 }

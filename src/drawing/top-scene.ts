@@ -1,6 +1,6 @@
 // The top view (x–y, seen from above, drawn in line with the front view so y runs the same way; forward is
-// down) as scene items: both front wheels at the pose's steer, steering arms, tie rods and the rack, the
-// shafts, and the turning construction (the wheel axes, where they meet, and the rear axle line).
+// down) as scene items: both front wheels at the pose's steer, steering arms, tie rods and the rack (or the
+// bellcranks: pivot, arm and the arc the tie-rod inner ball sweeps), the shafts, and the turning construction (the wheel axes, where they meet, and the rear axle line).
 import type { Layout } from "@/contracts/layout";
 import type { CornerPose } from "@/engine";
 import { fmt } from "@/figures/format";
@@ -60,7 +60,7 @@ export function topScene(input: TopSceneInput): Scene {
   }
   if (input.ghost) {
     const tv = layout.topView;
-    items.push({ type: "path", layer: "construction", part: "ghost-steering", points: [topOf([tv.rackEnd.x, tv.rackEnd.y, 0]), topOf([tv.steeringArmBall.x, tv.steeringArmBall.y, 0]), topOf([0, layout.frontView.wheelCentre.y, 0])], stroke: INK.ghost, widthPx: 1, dashPx: [3, 3] });
+    items.push({ type: "path", layer: "construction", part: "ghost-steering", points: [topOf([tv.tieRodInner.x, tv.tieRodInner.y, 0]), topOf([tv.steeringArmBall.x, tv.steeringArmBall.y, 0]), topOf([0, layout.frontView.wheelCentre.y, 0])], stroke: INK.ghost, widthPx: 1, dashPx: [3, 3] });
   }
   const notes: string[] = [];
   if (pose) {
@@ -72,7 +72,16 @@ export function topScene(input: TopSceneInput): Scene {
         { type: "dot", layer: "construction", part: "turn-centre", at: d.turnCentre, radiusPx: 4, fill: "#ffffff", stroke: INK.construction, widthPx: 2 },
       );
     }
-    items.push({ type: "path", layer: "steering", part: "rack", points: d.rack, stroke: partColour(fault, "tieRod", INK.arm), widthPx: 5, opacity: 0.6 });
+    if (d.rack) items.push({ type: "path", layer: "steering", part: "rack", points: d.rack, stroke: partColour(fault, "tieRod", INK.arm), widthPx: 5, opacity: 0.6 });
+    d.bellcranks.forEach((b, i) => {
+      const side = i === 0 ? "left" : "right";
+      const colour = partColour(fault, "bellcrank", INK.arm);
+      items.push(
+        { type: "path", layer: "construction", part: `${side}-bellcrank-arc`, points: b.arc, stroke: INK.construction, widthPx: 1, dashPx: [3, 3] },
+        { type: "path", layer: "steering", part: `${side}-bellcrank-arm`, points: b.arm, stroke: colour, widthPx: 4, opacity: 0.8 },
+        { type: "dot", layer: "steering", part: `${side}-bellcrank-pivot`, at: b.pivot, radiusPx: 3.5, fill: "#ffffff", stroke: colour, widthPx: 2 },
+      );
+    });
     items.push(...wheelItems("left", d.left, layout.drive.neckDiameterMm, fault, input.shaftColour ?? INK.shaft));
     items.push(...wheelItems("right", d.right, layout.drive.neckDiameterMm, null, INK.shaft));
     if (show.dimensions) {
@@ -90,7 +99,7 @@ export function topScene(input: TopSceneInput): Scene {
         const xy = (p: readonly [number, number]) => coordinateText([-p[1], p[0]], unit);
         items.push(
           { type: "label", layer: "dimensions", part: "steering-arm-ball-coordinates", at: d.left.steeringArm[1], text: `ball ${xy(d.left.steeringArm[1])}`, dxPx: 6, dyPx: 4, sizePx: 9, colour: INK.label },
-          { type: "label", layer: "dimensions", part: "rack-end-coordinates", at: d.left.tieRod[1], text: `rack end ${xy(d.left.tieRod[1])}`, dxPx: -20, dyPx: 6, sizePx: 9, colour: INK.label },
+          { type: "label", layer: "dimensions", part: "tie-rod-inner-coordinates", at: d.left.tieRod[1], text: `${d.rack ? "rack end" : "tie-rod inner"} ${xy(d.left.tieRod[1])}`, dxPx: -20, dyPx: 6, sizePx: 9, colour: INK.label },
         );
       }
     }

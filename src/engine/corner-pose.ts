@@ -4,22 +4,22 @@
  * the kingpin axis with a fixed-length tie rod), returned as points instead of figures.
  *
  * Vehicle frame (ISO 8855: x forward, y left, z up; origin on the ground under the centreline on the front
- * axle line), mm and degrees. The left wheel is solved at rack s; the right wheel is the mirror (y → −y)
- * of the left solved at −s, exactly as the analysis treats it.
+ * axle line), mm and degrees. The left wheel is solved at steering input q (rack mm or bellcrank degrees);
+ * the right wheel is the mirror (y → −y) of the left solved at −q, exactly as the analysis treats it.
  */
-import { staticPoints, staticTieRodLengthMm, type StaticPoints } from "./corner-points";
+import { staticPoints, staticTieRodLengthMm, steerInputLinkage, type StaticPoints } from "./corner-points";
 import type { KitLayout } from "./kit-layout";
 import { clampUnit, radToDeg } from "./math/angle";
 import { pointRotateAboutAxis, vec3RotateAboutAxis, vec3RotateX } from "./math/rotation";
 import type { Vec2 } from "./math/vec2";
 import type { Vec3 } from "./math/vec3";
-import { armBallCircle, knuckleRotationForRackRads, rackLinkage, tieRodBranch, tieRodClosure } from "./steering/linkage";
+import { armBallCircle, innerBallAt, knuckleRotationForInputRads, tieRodBranch, tieRodClosure } from "./steering/linkage";
 import { kingpinGroundPoint, type KingpinAxis } from "./steering/steer-axis";
 import { frontViewKnucklePoint, frontViewModel, frontViewPoseAtTravel, type FrontViewModel } from "./suspension/front-view";
 
 /** One wheel's steered knuckle at the pose (left wheel in its own frame; the right one mirrored). */
 export interface WheelPose {
-  /** False where the tie rod cannot reach at this rack position: the knuckle is then drawn unsteered. */
+  /** False where the tie rod cannot reach at this input position: the knuckle is then drawn unsteered. */
   readonly steerSolved: boolean;
   /** Knuckle rotation about the kingpin axis, degrees, + turns this wheel to the left. */
   readonly knuckleRotationDeg: number;
@@ -39,8 +39,10 @@ export interface WheelPose {
   /** Where the kingpin axis meets the ground under the wheel. */
   readonly kingpinGround: Vec3;
   readonly steeringArmBall: Vec3;
-  /** Tie-rod inner ball, moved with the rack. */
-  readonly rackEnd: Vec3;
+  /** Tie-rod inner ball, moved with the rack or turned with the bellcrank. */
+  readonly tieRodInner: Vec3;
+  /** The bellcrank's pivot (vertical axis through it) at the inner ball's height; null for a rack. */
+  readonly bellcrankPivot: Vec3 | null;
   readonly inboardJoint: Vec3;
   readonly outboardJoint: Vec3;
   /** Drive joint operating angle between the shaft and the stub axle, degrees, ≥ 0. */
@@ -49,12 +51,13 @@ export interface WheelPose {
 
 export interface CornerPose {
   readonly travelMm: number;
-  readonly rackMm: number;
+  /** Rack mm or bellcrank degrees. */
+  readonly steerInput: number;
   /** Chassis pivots of the left corner (fixed). */
   readonly lowerInner: Vec3;
   readonly upperInner: Vec3;
   readonly left: WheelPose;
-  /** The right wheel: the left solved at −rack, mirrored into y < 0. */
+  /** The right wheel: the left solved at −input, mirrored into y < 0. */
   readonly right: WheelPose;
   /** Front-view instant centre (y, z) of the left upright, null when the arms are parallel. */
   readonly instantCentre: Vec2 | null;
@@ -77,7 +80,7 @@ export function cornerPoser(layout: KitLayout): CornerPoser {
   const model = frontViewModel(layout.frontView);
   const points = staticPoints(layout);
   const tieRodLengthMm = staticTieRodLengthMm(points);
-  const branch = tieRodBranch(tieRodClosure(armBallCircle(points.axis, points.armBall), points.rackEnd, tieRodLengthMm));
+  const branch = tieRodBranch(tieRodClosure(armBallCircle(points.axis, points.armBall), points.tieRodInner, tieRodLengthMm));
   return { model, points, tieRodLengthMm, branch, layout };
 }
 
@@ -96,25 +99,27 @@ function mirrorWheel(w: WheelPose): WheelPose {
     upperOuter: mirror(w.upperOuter),
     kingpinGround: mirror(w.kingpinGround),
     steeringArmBall: mirror(w.steeringArmBall),
-    rackEnd: mirror(w.rackEnd),
+    tieRodInner: mirror(w.tieRodInner),
+    bellcrankPivot: w.bellcrankPivot ? mirror(w.bellcrankPivot) : null,
     inboardJoint: mirror(w.inboardJoint),
     outboardJoint: mirror(w.outboardJoint),
   };
 }
 
 /**
- * The corner at wheel-centre travel `travelMm` (+ bump) and rack displacement `rackMm` (+ towards +y).
- * Throws GeometryError where the arms cannot close at that travel; a rack position the tie rod cannot
- * reach gives steerSolved: false for that wheel rather than an error, so a preview never fails on it.
+ * The corner at wheel-centre travel `travelMm` (+ bump) and steering input `steerInput` (rack mm, + towards
+ * +y; or bellcrank degrees, + counter-clockwise from above). Throws GeometryError where the arms cannot
+ * close at that travel; an input position the tie rod cannot reach gives steerSolved: false for that wheel
+ * rather than an error, so a preview never fails on it.
  */
-export function cornerPoseAt(poser: CornerPoser, travelMm: number, rackMm: number): CornerPose {
+export function cornerPoseAt(poser: CornerPoser, travelMm: number, steerInput: number): CornerPose {
   const { model, points: pts } = poser;
   const pose = frontViewPoseAtTravel(model, travelMm);
   const rot = pose.uprightRotationRad;
   const axisPoint = frontViewKnucklePoint(model, pose, pts.axis.point);
   const axis: KingpinAxis = { point: axisPoint, direction: vec3RotateX(pts.axis.direction, rot) };
   const armBall0 = frontViewKnucklePoint(model, pose, pts.armBall);
-  const linkage = rackLinkage(armBallCircle(axis, armBall0), pts.rackEnd, poser.tieRodLengthMm, poser.branch);
+  const linkage = steerInputLinkage(pts, armBallCircle(axis, armBall0), poser.tieRodLengthMm, poser.branch);
   const knuckle = {
     wheelCentre: frontViewKnucklePoint(model, pose, pts.wheelCentre),
     spinAxis: vec3RotateX(pts.spinAxis, rot),
@@ -130,7 +135,7 @@ export function cornerPoseAt(poser: CornerPoser, travelMm: number, rackMm: numbe
   const upperOuter: Vec3 = [axisPoint[0] + tUpper * axis.direction[0], upperOuterOnAxis[1], upperOuterOnAxis[2]];
 
   const wheelAt = (s: number): WheelPose => {
-    const phi = knuckleRotationForRackRads(linkage, s);
+    const phi = knuckleRotationForInputRads(linkage, s);
     const solved = phi !== null;
     const a = phi ?? 0;
     const turn = (p: Vec3) => pointRotateAboutAxis(p, axisPoint, axis.direction, a);
@@ -159,19 +164,20 @@ export function cornerPoseAt(poser: CornerPoser, travelMm: number, rackMm: numbe
       upperOuter,
       kingpinGround: kingpinGroundPoint(axis, contact[2]),
       steeringArmBall: turn(knuckle.armBall),
-      rackEnd: [pts.rackEnd[0], pts.rackEnd[1] + s, pts.rackEnd[2]],
+      tieRodInner: innerBallAt(pts.input.kind, pts.tieRodInner, pts.input.pivot, s),
+      bellcrankPivot: pts.input.pivot,
       inboardJoint: pts.inboardJoint,
       outboardJoint: outboard,
       jointAngleDeg: radToDeg(Math.atan2(Math.sqrt(cx * cx + cy * cy + cz * cz), s3[0] * w[0] + s3[1] * w[1] + s3[2] * w[2])),
     };
   };
 
-  const left = wheelAt(rackMm);
-  const right = mirrorWheel(wheelAt(-rackMm));
+  const left = wheelAt(steerInput);
+  const right = mirrorWheel(wheelAt(-steerInput));
   const cpZ = pose.contactPatch[1];
   return {
     travelMm,
-    rackMm,
+    steerInput,
     lowerInner: [0, f.lowerInner.y, f.lowerInner.z],
     upperInner: [0, f.upperInner.y, f.upperInner.z],
     left,

@@ -15,3 +15,9 @@ export interface PointXYZ {
   readonly y: number;
   readonly z?: number;
 }
+
+/** A top-view position, mm: x forward, y left (a vertical axis through it, as a bellcrank pivot's). */
+export interface PointXY {
+  readonly x: number;
+  readonly y: number;
+}

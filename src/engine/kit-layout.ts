@@ -1,4 +1,4 @@
-import type { PointXYZ, PointYZ, PointYZX } from "./geometry-types";
+import type { PointXY, PointXYZ, PointYZ, PointYZX } from "./geometry-types";
 
 /**
  * The engine's input: one kit's front corner, left side (y > 0), in mm and degrees, axes after ISO 8855
@@ -7,7 +7,7 @@ import type { PointXYZ, PointYZ, PointYZX } from "./geometry-types";
  * which is the place where ranges are checked.
  */
 export interface KitLayout {
-  readonly schema: 1;
+  readonly schema: 2;
   readonly frontView: KitFrontView;
   readonly sideView: KitSideView;
   readonly topView: KitTopView;
@@ -38,17 +38,26 @@ export interface KitSideView {
   readonly casterOffsetMm?: number;
 }
 
-export type KitSteeringInput = { readonly kind: "rack"; readonly travelMm: number };
+/**
+ * What moves the tie rod's inner ball. A rack slides it along y by ± travelMm. A bellcrank turns it about
+ * a vertical axis through `pivot` (x, y) by ± travelDeg (+ counter-clockwise seen from above); the right corner's
+ * bellcrank is the mirror of the left one and turns with it through a drag link (both by the same angle,
+ * so the right wheel at +θ is the mirror of the left at −θ, as for the rack at ±s).
+ */
+export type KitSteeringInput =
+  | { readonly kind: "rack"; readonly travelMm: number }
+  | { readonly kind: "bellcrank"; readonly pivot: PointXY; readonly travelDeg: number };
 
 export interface KitTopView {
   /** Steering arm ball centre on the knuckle at static, mm; z absent = wheel-centre height. */
   readonly steeringArmBall: PointXYZ;
-  /** Tie-rod inner ball on the rack end at centre rack, mm; z absent = the steering arm ball's height. */
-  readonly rackEnd: PointXYZ;
-  /** Rack travel from centre, ± mm; the rack moves along y. */
+  /** Tie-rod inner ball at centre (on the rack end or the bellcrank arm), mm; z absent = the steering arm ball's height. */
+  readonly tieRodInner: PointXYZ;
   readonly steeringInput: KitSteeringInput;
   /** Front to rear axle line, mm. */
   readonly wheelbaseMm: number;
+  /** How far short of the binding limit the proposed steering stop sits, in degrees of the inner road wheel; absent = 1°. */
+  readonly stopMarginDeg?: number;
 }
 
 export type JointType = "dogbone" | "cvd" | "cv-ball" | "single-cardan" | "double-cardan";

@@ -1,12 +1,14 @@
 /**
- * Where a figure comes from, with the tags of REFERENCES.md:
- * "found" [F] a published source, "from-memory" [M] recalled from a named book or standard,
- * "derived" [D] worked out here, "common-practice" [C] a fact of the trade with no source.
+ * How the product knows a source, said in words on the methods page (never as a bracketed tag):
+ * "seen" — read at the address given, only what it shows is relied on; "recalled" — cited from the book or
+ * standard as remembered, its edition, chapter and clause not re-read; "derived" — worked out for this
+ * product from the geometry stated and checked numerically by a second, independent method;
+ * "common-practice" — a fact of the trade with no published source.
  */
-export type ProvenanceTag = "found" | "from-memory" | "derived" | "common-practice";
+export type SourceStatus = "seen" | "recalled" | "derived" | "common-practice";
 
-/** A figure's source: its tags (one or more, honestly mixed where a value is half memory, half practice) and a citation. */
+/** A figure's source: a plain note and the citation keys (methods page anchors, see methods/citations.ts) it rests on. */
 export interface FigureSource {
-  readonly provenance: readonly ProvenanceTag[];
-  readonly citation: string;
+  readonly note: string;
+  readonly cites: readonly string[];
 }

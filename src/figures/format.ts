@@ -18,8 +18,8 @@ const LIMIT_LABELS: Record<string, string> = {
   "neck-contact": "shaft neck meets the cup mouth",
   "slot-limit": "end of the cup slot",
   "rated-angle": "joint's rated angle",
-  linkage: "tie rod and steering arm in line (toggle)",
-  "rack-travel": "end of rack travel",
+  toggle: "tie rod over centre (in line with the steering arm)",
+  "input-travel": "end of the steering input's travel",
 };
 
 export function limitLabel(reason: string): string {

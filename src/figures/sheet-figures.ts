@@ -3,11 +3,17 @@
 // inputs as the property panel names them.
 import type { Layout } from "@/contracts/layout";
 import type { AnalysisResult } from "@/engine";
+import { methodByKey } from "@/engine/methods/method-entries";
 import { fmt } from "./format";
 import { FIELD_GROUPS, type FieldDef } from "./layout-fields";
 import { getAt } from "./layout-paths";
 import { formatLength, type LengthUnit } from "./length-unit";
-import { readoutGroups, type ReadoutGroup } from "./readout-figures";
+import { readoutGroups, type Readout, type ReadoutGroup } from "./readout-figures";
+
+/** A figure the sheet adds to the readouts, explained by its methods entry like every readout. */
+function extra(id: string, label: string, value: string, method: string, hint?: string): Readout {
+  return { id, label, value, method, explain: methodByKey(method).explain, ...(hint ? { hint } : {}) };
+}
 
 /** The readout groups with the strength group spelled out: shaft torque, shear stress and its allowable. */
 export function sheetFigureGroups(a: AnalysisResult, unit: LengthUnit): ReadoutGroup[] {
@@ -19,9 +25,9 @@ export function sheetFigureGroups(a: AnalysisResult, unit: LengthUnit): ReadoutG
           ...g,
           readouts: [
             ...g.readouts,
-            { id: "shaft-torque", label: "Shaft torque", value: fmt(s.shaftTorqueNmm, 0, "N·mm"), hint: `motor ${fmt(s.motorTorqueNm, 3, "N·m")} × ${fmt(s.overallRatio, 2)} overall` },
-            { id: "shear-stress", label: "Shear stress at the neck", value: fmt(s.shearStressMpa, 0, "MPa") },
-            { id: "allowable-shear", label: "Allowable shear", value: fmt(s.allowableShearMpa, 0, "MPa"), hint: s.allowableBasis === "across-layer-derated" ? "across-layer strength, derated" : "tensile yield / √3" },
+            extra("shaft-torque", "Shaft torque", fmt(s.shaftTorqueNmm, 0, "N·mm"), "shaft-torque", `motor ${fmt(s.motorTorqueNm, 3, "N·m")} × ${fmt(s.overallRatio, 2)} overall`),
+            extra("shear-stress", "Shear stress at the neck", fmt(s.shearStressMpa, 0, "MPa"), "shear-stress"),
+            extra("allowable-shear", "Allowable shear", fmt(s.allowableShearMpa, 0, "MPa"), "allowable-shear", s.allowableBasis === "across-layer-derated" ? "across-layer strength, derated" : "tensile yield / √3"),
           ],
         },
   );

@@ -5,8 +5,11 @@ import * as layoutSchemaRoute from "@/app/api/layout-schema/route";
 import * as kitAnalyzeRoute from "@/app/api/workspaces/[workspaceId]/kits/[kitId]/analyze/route";
 import * as kitsRoute from "@/app/api/workspaces/[workspaceId]/kits/route";
 import * as workspacesRoute from "@/app/api/workspaces/route";
-import { TARNWICK_10_BASE, TARNWICK_10_THIN_NECK } from "@/contracts/demo-layouts";
+import { DEMO_LAYOUTS, TARNWICK_10_BASE, TARNWICK_10_THIN_NECK } from "@/contracts/demo-layouts";
+import { isCitationKey } from "@/engine/methods/citations";
+import schema1 from "../contracts/fixtures/schema-1-documents.json";
 import { call, signUp } from "../helpers/api";
+import { OUTSIDE_REFERENCE } from "../helpers/outside-reference";
 
 let designer: Awaited<ReturnType<typeof signUp>>;
 let outsider: Awaited<ReturnType<typeof signUp>>;
@@ -32,7 +35,7 @@ describe("POST /api/analyze", () => {
     expect(res.status).toBe(200);
     const a = res.json.analysis;
     expect(a.steerLock.worst.innerDeg).toBeGreaterThan(10);
-    expect(["neck-contact", "slot-limit", "rated-angle", "linkage", "rack-travel"]).toContain(a.steerLock.worst.limitedBy);
+    expect(["neck-contact", "slot-limit", "rated-angle", "toggle", "input-travel"]).toContain(a.steerLock.worst.limitedBy);
     expect(a.drive.maxJointAngleWithinLockDeg).toBeLessThanOrEqual(a.drive.jointLimitDeg + 1e-6);
     const statik = a.atStatic;
     expect(statik.travelMm).toBe(0);
@@ -75,7 +78,7 @@ describe("POST /api/analyze", () => {
     const jsonValue = fc.jsonValue({ maxDepth: 4 });
     const nearLayout = fc.record({
       layout: fc.record({
-        schema: fc.oneof(fc.constant(1), fc.constant(0), jsonValue),
+        schema: fc.oneof(fc.constant(2), fc.constant(1), fc.constant(0), jsonValue),
         frontView: fc.oneof(fc.constant(TARNWICK_10_BASE.frontView), jsonValue),
         sideView: fc.oneof(fc.constant(TARNWICK_10_BASE.sideView), jsonValue),
         topView: fc.oneof(fc.constant(TARNWICK_10_BASE.topView), jsonValue),
@@ -93,6 +96,35 @@ describe("POST /api/analyze", () => {
       }),
       { numRuns: 150 },
     );
+  });
+});
+
+/** Every string anywhere in a JSON answer. */
+function strings(v: unknown, out: string[] = []): string[] {
+  if (typeof v === "string") out.push(v);
+  else if (Array.isArray(v)) v.forEach((x) => strings(x, out));
+  else if (v !== null && typeof v === "object") Object.values(v).forEach((x) => strings(x, out));
+  return out;
+}
+
+describe("the answers cite the methods page, nothing outside the product", () => {
+  it.each(DEMO_LAYOUTS.map((d) => [d.key, d.layout] as const))("%s: no reference to a file outside the product; every source named is a citation key", async (_, layout) => {
+    const res = await analyze({ layout, grid: { travelSteps: 5, steerSteps: 7 } });
+    expect(res.status).toBe(200);
+    const text = JSON.stringify(res.json);
+    expect(text).not.toMatch(OUTSIDE_REFERENCE);
+    for (const k of res.json.analysis.strength.allowableCitations as string[]) expect(isCitationKey(k), k).toBe(true);
+    for (const s of strings(res.json)) expect(s).not.toMatch(/\bREFERENCES\b/);
+  });
+
+  it("a schema 1 document (rackEnd, ±10 mm rack) analyses, and the answer says its rack runs past the tie-rod toggle", async () => {
+    const doc = (schema1 as unknown as { base: { document: unknown } }).base.document;
+    const res = await analyze({ layout: doc, grid: { travelSteps: 5, steerSteps: 9 } });
+    expect(res.status).toBe(200);
+    const stop = res.json.analysis.steeringStop;
+    expect(stop.status).toBe("needed");
+    expect(stop.toggle).not.toBeNull();
+    expect(Math.abs(stop.toggle.steerInput)).toBeLessThan(10);
   });
 });
 

@@ -195,7 +195,8 @@ describe("the sweeps (CSV)", () => {
     // Full droop first, full bump last; the rack from one end of its travel to the other.
     expect(Number(rows[0]!.travel_mm)).toBe(-TARNWICK_10_BASE.frontView.droopTravelMm);
     expect(Number(rows.at(-1)!.travel_mm)).toBe(TARNWICK_10_BASE.frontView.bumpTravelMm);
-    expect(Number(rows[0]!.rack_mm)).toBe(-TARNWICK_10_BASE.topView.steeringInput.travelMm);
+    const rack = TARNWICK_10_BASE.topView.steeringInput;
+    expect(Number(rows[0]!.rack_mm)).toBe(rack.kind === "rack" ? -rack.travelMm : NaN);
     // The right wheel mirrors the left at the opposite rack; the clearance follows the joint angle.
     const row = rows[4 * 13 + 2]!;
     const mirror = rows[4 * 13 + 10]!;

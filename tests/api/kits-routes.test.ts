@@ -217,18 +217,19 @@ describe("layouts stored with a kit", () => {
   it("an older (schema 0) document is accepted and comes back upgraded", async () => {
     const { schema: _schema, sideView, topView, strength, frontView, ...rest } = TARNWICK_10_BASE;
     void _schema;
-    const { steeringInput, ...top0 } = topView;
+    const { steeringInput, tieRodInner, ...top0 } = topView;
     const { gearRatios, ...strength0 } = strength;
     const old = {
       ...rest,
       frontView: { ...frontView, casterDeg: sideView.casterDeg, casterOffsetMm: sideView.casterOffsetMm },
-      topView: { ...top0, rackTravelMm: steeringInput.travelMm },
+      topView: { ...top0, rackEnd: tieRodInner, rackTravelMm: (steeringInput as { travelMm: number }).travelMm },
       strength: { ...strength0, gearRatio: gearRatios[0]! * gearRatios[1]! },
     };
     const created = await call<P>(kitsRoute.POST, "POST", kitsPath(ws), { workspaceId: ws }, { cookie: editor.cookie, body: { name: "Old file", scale: "1:10", layout: old } });
     expect(created.status).toBe(201);
-    expect(created.json.kit.layout.schema).toBe(1);
+    expect(created.json.kit.layout.schema).toBe(2);
     expect(created.json.kit.layout.sideView).toEqual({ casterDeg: 22, casterOffsetMm: -5 });
-    expect(created.json.kit.layout.topView.steeringInput).toEqual({ kind: "rack", travelMm: 10 });
+    expect(created.json.kit.layout.topView.steeringInput).toEqual({ kind: "rack", travelMm: 6.5 });
+    expect(created.json.kit.layout.topView.tieRodInner).toEqual(tieRodInner);
   });
 });

@@ -20,7 +20,7 @@ const ids: Record<string, string> = {};
 
 const neck = (mm: number): Layout => ({ ...TARNWICK_10_BASE, drive: { ...TARNWICK_10_BASE.drive, neckDiameterMm: mm } });
 // An impossible layout the engine cannot solve (tie rod far too short to reach): saved, with no readouts.
-const unsolvable: Layout = { ...TARNWICK_10_BASE, topView: { ...TARNWICK_10_BASE.topView, rackEnd: { x: -20, y: 98.5, z: 36 } } };
+const unsolvable: Layout = { ...TARNWICK_10_BASE, topView: { ...TARNWICK_10_BASE.topView, tieRodInner: { x: -20, y: 98.5, z: 36 } } };
 
 type Row = { id: string; name: string; tags: string[]; scale: string; readouts: Record<string, number | null>; archivedAt: string | null; createdByName: string };
 const list = async (query: string, cookie = owner.cookie) => {

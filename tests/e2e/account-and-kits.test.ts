@@ -78,8 +78,12 @@ describe("a kit's analysis sheet", () => {
     expect(lockText).toMatch(/\d+\.\d°/);
     expect(lockText).not.toMatch(/NaN|Infinity|undefined/);
     const strength = page.getByRole("region", { name: "Shaft strength at the neck" });
-    expect(await strength.innerText()).toMatch(/Safety factor\s+\d+\.\d\d/);
+    // The label is a link to its methods entry, described for screen readers; the figure follows it.
+    expect(await strength.innerText()).toMatch(/Safety factor\s+(?:\(how it is worked out; opens in a new tab\)\s+)?\d+\.\d\d/);
+    // The caution stands beside the strength figures, not only at the foot of the sheet.
+    expect(await strength.innerText()).toMatch(/An estimate: printed parts vary with layer direction/);
     await page.getByRole("table", { name: "Neck diameter what-if" }).waitFor();
-    await page.getByText("Cautions").first().waitFor();
+    // The cautions at the foot of the sheet (exactly its heading: the figures' explanations also mention cautions).
+    await page.getByText("Cautions", { exact: true }).first().waitFor();
   });
 });

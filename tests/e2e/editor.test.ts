@@ -305,6 +305,30 @@ describe("the kit editor", () => {
     await shot(page, "keyboard");
   });
 
+  it("a bellcrank kit: its pivot is a handle of the top view, moving it changes the stop (an angle), and the panel switches back to a rack", async () => {
+    const bellcrank = DEMO_LAYOUTS.find((d) => d.key === "tarnwick-10-bellcrank")!;
+    const { kit } = await apiAs<{ kit: Kit }>(owner, `/api/workspaces/${workspaceId}/kits`, { method: "POST", body: { name: bellcrank.name, scale: "1:10", layout: bellcrank.layout } });
+    const page = await pageAs(browser, owner, { width: 1280, height: 800 });
+    await openEditor(page, kit.id);
+    expect(await figure(page, "steering-stop")).toMatch(/^\d+\.\d°$/);
+    const stop0 = await figure(page, "steering-stop");
+    // Move the pivot 3 mm rearward with the keyboard (six grid steps up the top view, where forward is down):
+    // a 12 mm arm instead of 15 mm turns further for the same inner-ball travel, so the stop angle changes.
+    const pivot = page.locator('[data-handle="top:bellcrankPivot"]');
+    await pivot.focus();
+    const before = await seq(page);
+    for (let i = 0; i < 6; i++) await page.keyboard.press("ArrowUp");
+    await settled(page, before);
+    expect(await figure(page, "steering-stop")).not.toBe(stop0);
+    await page.getByTestId("tab-properties").click();
+    await page.getByLabel("Steering input").selectOption("rack");
+    await page.getByLabel("Rack travel each way").waitFor();
+    await page.getByTestId("tab-readouts").click();
+    await page.waitForFunction(() => /mm$/.test(document.querySelector('[data-testid="steering-stop"]')?.textContent?.trim() ?? ""), undefined, { timeout: 20_000 });
+    await expectAccessible(page, { name: "editor-bellcrank-to-rack" });
+    await shot(page, "bellcrank");
+  });
+
   it.each([[1280, 800], [1920, 1080]])("at %i×%i no panel overlaps another", async (width, height) => {
     const kit = await newDemoKit();
     const page = await pageAs(browser, owner, { width, height });

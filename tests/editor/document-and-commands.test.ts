@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
-import { TARNWICK_10_BASE } from "@/contracts/demo-layouts";
+import { TARNWICK_10_BASE, TARNWICK_10_BELLCRANK } from "@/contracts/demo-layouts";
 import { layoutFieldsSchema } from "@/contracts/layout";
 import { moveHandle, nudgeHandle, setNeckDiameter } from "@/editor/commands/edit-commands";
-import { handleById, handlePlanePoint, HANDLES } from "@/editor/document/handles";
+import { handleById, handlePlanePoint, HANDLES, handlesOf } from "@/editor/document/handles";
 import { ALL_FIELDS, fieldRange, layoutMessageInWords } from "@/figures/layout-fields";
 import { layoutSchema } from "@/contracts/layout";
 import { getAt, setAt } from "@/figures/layout-paths";
@@ -30,7 +30,12 @@ describe("handles", () => {
       expect(Number.isFinite(u) && Number.isFinite(v), h.id).toBe(true);
     }
     expect(HANDLES.filter((h) => h.view === "front").map((h) => h.id.split(":")[1])).toEqual(["lowerInner", "lowerOuter", "upperInner", "upperOuter", "wheelCentre", "inboardJoint", "outboardJoint"]);
-    expect(HANDLES.filter((h) => h.view === "top").map((h) => h.id.split(":")[1])).toEqual(["steeringArmBall", "rackEnd", "inboardJoint", "outboardJoint"]);
+    expect(handlesOf("top", TARNWICK_10_BASE).map((h) => h.id.split(":")[1])).toEqual(["steeringArmBall", "tieRodInner", "inboardJoint", "outboardJoint"]);
+    // A bellcrank's pivot is a point of the layout only with a bellcrank input, and then it has a handle.
+    expect(handlesOf("top", TARNWICK_10_BELLCRANK).map((h) => h.id.split(":")[1])).toEqual(["steeringArmBall", "tieRodInner", "bellcrankPivot", "inboardJoint", "outboardJoint"]);
+    expect(handlePlanePoint(TARNWICK_10_BELLCRANK, handleById("top:bellcrankPivot")!)).toEqual([35, 5]);
+    const moved = moveHandle(TARNWICK_10_BELLCRANK, "top:bellcrankPivot", 33, 7);
+    expect(moved.topView.steeringInput).toEqual({ kind: "bellcrank", pivot: { x: -7, y: 33 }, travelDeg: 25 });
   });
 
   it("the top view draws forward down the screen: plane v = −x", () => {
@@ -81,7 +86,7 @@ describe("field table", () => {
 describe("contract messages in the panel's words", () => {
   it("names every field by its label, never by its dotted path", () => {
     expect(layoutMessageInWords("drive.neckDiameterMm must be smaller than drive.cupMouthDiameterMm")).toBe("Neck diameter must be smaller than cup mouth diameter");
-    expect(layoutMessageInWords("topView.rackEnd must be at least 1 mm from topView.steeringArmBall (the tie rod has a length)")).not.toMatch(/topView\./);
+    expect(layoutMessageInWords("topView.tieRodInner must be at least 1 mm from topView.steeringArmBall (the tie rod has a length)")).toBe("Tie-rod inner ball must be at least 1 mm from steering arm ball (the tie rod has a length)");
     expect(layoutMessageInWords("a path we do not know: drive.nothingHere stays")).toBe("a path we do not know: drive.nothingHere stays");
   });
 
@@ -91,7 +96,8 @@ describe("contract messages in the panel's words", () => {
       setAt(TARNWICK_10_BASE, "frontView.upperOuter.z", TARNWICK_10_BASE.frontView.lowerOuter.z - 1),
       setAt(TARNWICK_10_BASE, "drive.neckDiameterMm", 9),
       setAt(TARNWICK_10_BASE, "drive.outboardJoint.y", TARNWICK_10_BASE.drive.inboardJoint.y - 1),
-      setAt(TARNWICK_10_BASE, "topView.rackEnd", TARNWICK_10_BASE.topView.steeringArmBall),
+      setAt(TARNWICK_10_BASE, "topView.tieRodInner", TARNWICK_10_BASE.topView.steeringArmBall),
+      setAt(TARNWICK_10_BELLCRANK, "topView.steeringInput.pivot", { x: TARNWICK_10_BELLCRANK.topView.tieRodInner.x, y: TARNWICK_10_BELLCRANK.topView.tieRodInner.y }),
     ];
     for (const layout of broken) {
       const result = layoutSchema.safeParse(layout);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { DEMO_LAYOUTS, TARNWICK_10_BASE } from "@/contracts/demo-layouts";
+import { DEMO_LAYOUTS, TARNWICK_10_BASE, TARNWICK_10_BELLCRANK } from "@/contracts/demo-layouts";
 import { formKey, formToLayout, gearKey, layoutToForm } from "@/editor/panel/form-values";
 
 const neck = formKey("drive.neckDiameterMm");
@@ -52,6 +52,24 @@ describe("the property panel's values", () => {
     // A material of one's own needs its source named.
     const custom = formToLayout({ ...layoutToForm(TARNWICK_10_BASE, "mm"), [formKey("strength.material.kind")]: "custom", [formKey("strength.material.name")]: "PA12 GF" }, "mm", TARNWICK_10_BASE);
     expect(!custom.ok && custom.errors[formKey("strength.material.source")]).toBe("Source of the figures is required");
+  });
+
+  it("switches the steering input between rack and bellcrank, with starting values for the bellcrank's pivot and travel", () => {
+    const kind = formKey("topView.steeringInput.kind");
+    const values = { ...layoutToForm(TARNWICK_10_BASE, "mm"), [kind]: "bellcrank" };
+    expect(values[formKey("topView.steeringInput.travelDeg")]).toBe("25");
+    const r = formToLayout(values, "mm", TARNWICK_10_BASE);
+    expect(r.ok && r.layout.topView.steeringInput).toEqual({ kind: "bellcrank", pivot: { x: -5, y: 35 }, travelDeg: 25 });
+    expect(r.ok && r.layout.schema).toBe(2);
+    const back = formToLayout({ ...layoutToForm(TARNWICK_10_BELLCRANK, "mm"), [kind]: "rack" }, "mm", TARNWICK_10_BELLCRANK);
+    expect(back.ok && back.layout.topView.steeringInput).toEqual({ kind: "rack", travelMm: 6.5 });
+    // The stop margin is optional: empty means 1°, a value is kept, out of range is named.
+    const margin = formKey("topView.stopMarginDeg");
+    expect(values[margin]).toBe("");
+    const withMargin = formToLayout({ ...layoutToForm(TARNWICK_10_BASE, "mm"), [margin]: "2" }, "mm", TARNWICK_10_BASE);
+    expect(withMargin.ok && withMargin.layout.topView.stopMarginDeg).toBe(2);
+    const tooMuch = formToLayout({ ...layoutToForm(TARNWICK_10_BASE, "mm"), [margin]: "12" }, "mm", TARNWICK_10_BASE);
+    expect(!tooMuch.ok && tooMuch.errors[margin]).toBe("Steering stop margin must be from 0 to 10°");
   });
 
   it("reads the gear ratios as a list", () => {

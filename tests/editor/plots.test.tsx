@@ -3,7 +3,7 @@ import { describe, expect, it } from "vitest";
 import { TARNWICK_10_BASE } from "@/contracts/demo-layouts";
 import { analyzeLayout, neckTradeoff, type AnalysisResult, type EnvelopeResult } from "@/engine";
 import { EditorPlots } from "@/editor/plots/editor-plots";
-import { envelopeCells, limitContour, lockLines } from "@/editor/plots/envelope-map-geometry";
+import { envelopeCells, limitContour, lockLines, pastLimitCells, stopLines } from "@/editor/plots/envelope-map-geometry";
 import { ackermannPlotRows } from "@/editor/plots/ackermann-plot";
 import { neckPickTestId } from "@/editor/plots/neck-tradeoff-plot";
 import { chartValue, figureText } from "@/editor/plots/plot-data";
@@ -26,7 +26,7 @@ function linearEnvelope(): EnvelopeResult {
   const rack = [-4, -2, 0, 2, 4];
   const road = travelMm.map(() => rack.map((r) => r * 5)); // steer = 5 × rack, deg
   const joint = travelMm.map((t) => rack.map((r) => 2 * (r * 5) + t / 10));
-  return { travelMm, rackMm: rack, leftRoadWheelDeg: road, jointAngleDeg: joint } as unknown as EnvelopeResult;
+  return { travelMm, steerInput: rack, leftRoadWheelDeg: road, jointAngleDeg: joint } as unknown as EnvelopeResult;
 }
 
 describe("plot data", () => {
@@ -56,7 +56,8 @@ describe("plot data", () => {
     const rows = ackermannPlotRows(ANALYSIS);
     const { kingpinTrackMm: w, wheelbaseMm: L } = ANALYSIS.ackermann;
     const cot = (deg: number) => 1 / Math.tan((deg * Math.PI) / 180);
-    const turning = rows.filter((r) => (r.inner ?? 0) > 2);
+    // Chart values are rounded to 1e-3°; above 5° that moves cot δ by under 0.003, inside the check's 0.005.
+    const turning = rows.filter((r) => (r.inner ?? 0) > 5);
     expect(turning.length).toBeGreaterThan(3);
     for (const r of turning) {
       expect(cot(r.ideal!) - cot(r.inner!)).toBeCloseTo(w / L, 2);
@@ -90,6 +91,18 @@ describe("the envelope map's geometry", () => {
     expect([corner.x0, corner.x1, corner.y0, corner.y1]).toEqual([-25, -15, -15, -5]);
   });
 
+  it("past the limit: the cells beyond each travel's lock, either way; the stop line where the input sits at the stop", () => {
+    const env = linearEnvelope();
+    // Lock at ±2 (input) on the middle row, ±4 (the whole travel) on the others.
+    const locks = [4, 2, 4].map((u, i) => ({ travelMm: env.travelMm[i]!, steerInput: u, innerDeg: 0, outerDeg: 0, jointAngleDeg: 0, limitedBy: "rated-angle" as const }));
+    const past = pastLimitCells(envelopeCells(env), env, locks);
+    expect(past.map((c) => [c.i, c.j])).toEqual([[1, 0], [1, 4]]);
+    // steer = 5 × input on every row, so a stop at input 1.5 is at ±7.5° on each travel.
+    const lines = stopLines(env, 1.5);
+    expect(lines.leftTurn).toEqual(env.travelMm.map((t) => [7.5, t]));
+    expect(lines.rightTurn).toEqual(env.travelMm.map((t) => [-7.5, t]));
+  });
+
   it("the lock lines: the left wheel is inner in a left turn (+) and outer in a right turn (−), by travel", () => {
     const lines = lockLines(ANALYSIS.steerLock.perTravel);
     const rows = [...ANALYSIS.steerLock.perTravel].sort((a, b) => a.travelMm - b.travelMm);
@@ -114,7 +127,8 @@ function renderPlots(readOnly = false) {
   return { ...view, store: store! };
 }
 
-describe("the editor's plots", () => {
+// Rendering hundreds of svg cells in jsdom: seconds on a loaded machine, so room to finish (not a speed check).
+describe("the editor's plots", { timeout: 30_000 }, () => {
   it("the envelope tab draws one cell per solved grid point, the limit contour and no NaN", () => {
     const { container } = renderPlots();
     fireEvent.click(screen.getByTestId("tab-plot-tab-envelope"));
@@ -123,6 +137,34 @@ describe("the editor's plots", () => {
     expect(map.querySelectorAll("[data-cell]")).toHaveLength(solved);
     expect(within(map).getByText(`joint limit ${figureText(ANALYSIS.drive.jointLimitDeg, 1)}°`)).toBeTruthy();
     expect(container.innerHTML).not.toMatch(/NaN/);
+  });
+
+  it("the envelope map hatches where the rack as drawn drives the joint past its limit, and draws the proposed stop", () => {
+    renderPlots();
+    fireEvent.click(screen.getByTestId("tab-plot-tab-envelope"));
+    const map = screen.getByTestId("plot-envelope");
+    const expected = ANALYSIS.envelope.jointAngleDeg.flatMap((row, i) =>
+      row.map((v, j) => (v !== null && Math.abs(ANALYSIS.envelope.steerInput[j]!) > Math.abs(ANALYSIS.steerLock.perTravel[i]!.steerInput) ? 1 : 0)),
+    ).reduce<number>((a, b) => a + b, 0);
+    expect(expected).toBeGreaterThan(0);
+    expect(Number(within(map).getByTestId("envelope-past-limit").dataset.count)).toBe(expected);
+    expect(within(map).getByTestId("envelope-stop-line")).toBeTruthy();
+    expect(within(map).getByText("past the limit: the rack as drawn reaches here")).toBeTruthy();
+    expect(within(map).getByText("proposed stop")).toBeTruthy();
+    expect(within(map).getByTestId("envelope-summary").textContent).toMatch(/Hatched: where the rack as drawn \(±6\.50 mm\) drives the joint past its limit\. Green: the proposed stop at 4\.4\d mm each side\./);
+  });
+
+  it("charts name their series in words, each beside a sample of its own line and nothing else", () => {
+    const { container } = renderPlots();
+    expect(container.querySelector(".recharts-legend-wrapper")).toBeNull();
+    const legend = screen.getByTestId("series-legend");
+    expect(within(legend).getAllByRole("listitem").map((li) => li.textContent)).toEqual(["camber (°)", "roll-centre height (mm)"]);
+    for (const li of within(legend).getAllByRole("listitem")) {
+      const svg = li.querySelector("svg")!;
+      expect([...svg.children].map((c) => c.tagName.toLowerCase())).toEqual(["line"]);
+    }
+    fireEvent.click(screen.getByTestId("tab-plot-tab-ackermann"));
+    expect(within(screen.getByTestId("series-legend")).getAllByRole("listitem").map((li) => li.textContent)).toEqual(["this linkage", "100 % Ackermann", "parallel steer (0 %)"]);
   });
 
   it("picking a neck on the trade-off sets that neck as one undo step", () => {

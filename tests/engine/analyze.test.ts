@@ -47,7 +47,15 @@ describe("demo layouts (acceptance of issue 3)", () => {
     // Neck 5, mouth 8, pivot depth 2 → 29.4471° (REFERENCES §8.2).
     expectNear(r.drive.neckContactAngleDeg!, 29.4471, DEG_TOL, "neck contact angle");
     expectNear(r.steerLock.static.jointAngleDeg, r.drive.neckContactAngleDeg!, 1e-6, "joint angle at lock");
-    expectNear(r.drive.minNeckClearanceMm!, 0, 1e-6, "clearance at lock");
+    // A stop with no set-back sits at the contact: the gap (D/2)cos β − a sin β − d/2 (REFERENCES §8.1) is zero there.
+    const atContact = analyzeLayout({ ...TARNWICK_10_BASE, topView: { ...TARNWICK_10_BASE.topView, stopMarginDeg: 0 } }, GRID);
+    expectNear(atContact.steeringStop.clearanceAtStopMm!, 0, 1e-6, "clearance at the limit");
+    // The proposed stop (1° of steer short of it) leaves a gap, by the same formula at its joint angle.
+    const stop = r.steeringStop;
+    const b = (stop.jointAngleAtStopDeg * Math.PI) / 180;
+    expectNear(stop.clearanceAtStopMm!, 4 * Math.cos(b) - 2 * Math.sin(b) - 2.5, 1e-12, "gap at the proposed stop");
+    expect(stop.clearanceAtStopMm!).toBeGreaterThan(0.02);
+    expectNear(stop.angleMarginDeg, r.drive.jointLimitDeg - stop.jointAngleAtStopDeg, 1e-12, "angle margin");
   });
 
   it("a 4.0 mm neck raises steer lock (now the rated angle binds) and lowers the safety factor", () => {
@@ -92,7 +100,7 @@ describe("internal consistency of one analysis", () => {
       const o = vec3RotateAboutAxis([0 - axis.point[0], d.outboardJoint.y - axis.point[1], d.outboardJoint.z - axis.point[2]], axis.direction, phi);
       const w = vec3RotateAboutAxis(spinAxisFromCamberDeg(f.staticCamberDeg), axis.direction, phi);
       const shaft = [o[0] + axis.point[0], o[1] + axis.point[1] - d.inboardJoint.y, o[2] + axis.point[2] - d.inboardJoint.z] as const;
-      expectNear(s.leftJointAngleDeg, jointOperatingAngleDeg(shaft, w), 1e-9, `joint angle at rack ${s.rackMm}`);
+      expectNear(s.leftJointAngleDeg, jointOperatingAngleDeg(shaft, w), 1e-9, `joint angle at rack ${s.steerInput}`);
     }
   });
 
@@ -101,13 +109,13 @@ describe("internal consistency of one analysis", () => {
     const axisR = kingpinAxisFromBallJoints([-f.lowerOuter.y, f.lowerOuter.z], [-f.upperOuter.y, f.upperOuter.z], 22, -5, f.wheelCentre.z);
     // kingpinAxisFromBallJoints is written for the left corner; mirrored points give the right axis directly.
     const circle = armBallCircle(axisR, [t.steeringArmBall.x, -t.steeringArmBall.y, t.steeringArmBall.z!]);
-    const rackEnd = [t.rackEnd.x, -t.rackEnd.y, t.rackEnd.z!] as const;
+    const tieRodInner = [t.tieRodInner.x, -t.tieRodInner.y, t.tieRodInner.z!] as const;
     const l = r.steering.tieRodLengthMm;
-    const branch = tieRodBranch(tieRodClosure(circle, rackEnd, l));
+    const branch = tieRodBranch(tieRodClosure(circle, tieRodInner, l));
     for (const s of r.steering.steps) {
-      const phi = knuckleRotationForClosureRads(tieRodClosure(circle, [rackEnd[0], rackEnd[1] + s.rackMm, rackEnd[2]], l), branch)!;
+      const phi = knuckleRotationForClosureRads(tieRodClosure(circle, [tieRodInner[0], tieRodInner[1] + s.steerInput, tieRodInner[2]], l), branch)!;
       const fwd = vec3RotateAboutAxis([1, 0, 0], axisR.direction, phi);
-      expectNear(s.rightRoadWheelDeg, (Math.atan2(fwd[1], fwd[0]) * 180) / Math.PI, 1e-9, `right wheel at rack ${s.rackMm}`);
+      expectNear(s.rightRoadWheelDeg, (Math.atan2(fwd[1], fwd[0]) * 180) / Math.PI, 1e-9, `right wheel at rack ${s.steerInput}`);
     }
   });
 
@@ -136,7 +144,7 @@ describe("named errors, never NaN", () => {
     expect(() => analyzeLayout(TARNWICK_10_BASE, { travelSteps: 1000 })).toThrowError(/travelSteps/);
     expect(() => analyzeLayout(TARNWICK_10_BASE, { steerSteps: 2.5 })).toThrowError(/steerSteps/);
   });
-  it("a linkage that runs out of reach within the rack travel is reported as the 'linkage' limit with a sentence", () => {
+  it("a tie rod that goes over centre within the rack travel is reported as the 'toggle' limit with a sentence", () => {
     // A short steering arm and a long rack stroke: the tie rod goes over centre before the rack ends.
     const layout: Layout = {
       ...TARNWICK_10_BASE,
@@ -144,13 +152,15 @@ describe("named errors, never NaN", () => {
       drive: { ...TARNWICK_10_BASE.drive, jointType: "cv-ball", ratedAngleDeg: 89, cupMouthDiameterMm: 30, pivotDepthMm: 0, neckDiameterMm: 1 },
     };
     const r = analyzeLayout(layout, GRID);
-    expect(r.steerLock.static.limitedBy).toBe("linkage");
-    expect(r.warnings.some((w) => /^tie rod cannot reach the steering arm beyond \d+\.\d° of steer/.test(w))).toBe(true);
+    expect(r.steerLock.static.limitedBy).toBe("toggle");
+    expect(r.steeringStop.limitedBy).toBe("toggle");
+    expect(r.warnings.some((w) => /^tie rod goes over centre \(in line with the steering arm\) beyond \d+\.\d° of steer/.test(w))).toBe(true);
     expectAllFinite(r);
   });
 });
 
-describe("properties over random layouts near the demo (fast-check)", () => {
+// Many analyses each: on a loaded 2-core machine these take seconds, so they get room (not a speed check).
+describe("properties over random layouts near the demo (fast-check)", { timeout: 60_000 }, () => {
   it("no valid layout gives NaN or Infinity: it analyses with finite numbers or throws a GeometryError", () => {
     fc.assert(
       fc.property(layoutNearDemo, (layout) => {
@@ -169,13 +179,13 @@ describe("properties over random layouts near the demo (fast-check)", () => {
         if (!r) return;
         expect(r.drive.jointLimitDeg).toBeLessThanOrEqual(layout.drive.ratedAngleDeg);
         for (const l of [r.steerLock.static, ...r.steerLock.perTravel]) {
-          if (l.rackMm !== 0) expect(l.jointAngleDeg).toBeLessThanOrEqual(r.drive.jointLimitDeg + 1e-9);
+          if (l.steerInput !== 0) expect(l.jointAngleDeg).toBeLessThanOrEqual(r.drive.jointLimitDeg + 1e-9);
           // Lock 0: the joint is already past its limit with the wheels straight, and the result says so.
           else expect(r.warnings.some((w) => w.startsWith("drive joint:") && w.includes("already exceeds"))).toBe(true);
         }
-        const lockU = Math.abs(r.steerLock.static.rackMm);
+        const lockU = Math.abs(r.steerLock.static.steerInput);
         for (const s of r.steering.steps) {
-          if (Math.abs(s.rackMm) <= lockU) expect(Math.max(s.leftJointAngleDeg, s.rightJointAngleDeg)).toBeLessThanOrEqual(r.drive.jointLimitDeg + 1e-9);
+          if (Math.abs(s.steerInput) <= lockU) expect(Math.max(s.leftJointAngleDeg, s.rightJointAngleDeg)).toBeLessThanOrEqual(r.drive.jointLimitDeg + 1e-9);
         }
       }),
       { numRuns: 60 },
@@ -209,12 +219,12 @@ describe("properties over random layouts near the demo (fast-check)", () => {
         const t = layout.topView;
         const mirrored: Layout = {
           ...layout,
-          topView: { ...t, steeringArmBall: { ...t.steeringArmBall, x: -t.steeringArmBall.x }, rackEnd: { ...t.rackEnd, x: -t.rackEnd.x } },
+          topView: { ...t, steeringArmBall: { ...t.steeringArmBall, x: -t.steeringArmBall.x }, tieRodInner: { ...t.tieRodInner, x: -t.tieRodInner.x } },
         };
         const a = analyzeOrGeometryError(layout);
         const b = analyzeOrGeometryError(mirrored);
         if (!a || !b) return;
-        expect(b.steering.leftTurnRackSign).toBe(-a.steering.leftTurnRackSign);
+        expect(b.steering.leftTurnInputSign).toBe(-a.steering.leftTurnInputSign);
         a.steering.steps.forEach((s, i) => {
           const m = b.steering.steps[i];
           expectNear(m.leftRoadWheelDeg, -s.leftRoadWheelDeg, 1e-9, "road angle mirrored");
@@ -223,7 +233,7 @@ describe("properties over random layouts near the demo (fast-check)", () => {
         });
         // The left turn of the mirrored car is the right turn of the original: same rack stroke and joint
         // angle, but its inner wheel is the original's outer one (Ackermann becomes reverse Ackermann).
-        expectNear(b.steerLock.static.rackMm, -a.steerLock.static.rackMm, 1e-6, "lock rack");
+        expectNear(b.steerLock.static.steerInput, -a.steerLock.static.steerInput, 1e-6, "lock rack");
         expectNear(b.steerLock.static.innerDeg, a.steerLock.static.outerDeg, 1e-6, "lock inner ↔ outer");
         expectNear(b.steerLock.static.outerDeg, a.steerLock.static.innerDeg, 1e-6, "lock outer ↔ inner");
         expectNear(b.steerLock.static.jointAngleDeg, a.steerLock.static.jointAngleDeg, 1e-6, "joint angle at lock");

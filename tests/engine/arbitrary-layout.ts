@@ -45,7 +45,7 @@ export const layoutNearDemo: fc.Arbitrary<Layout> = fc
       topView: {
         ...b.topView,
         steeringArmBall: { x: r.armX, y: r.armY, z: 36 },
-        rackEnd: { x: r.rackX, y: r.rackY, z: 36 },
+        tieRodInner: { x: r.rackX, y: r.rackY, z: 36 },
         steeringInput: { kind: "rack", travelMm: r.rackTravelMm },
       },
       drive: {

@@ -11,7 +11,7 @@ describe("cornerPoseAt agrees with analyzeLayout", () => {
     const a = analyzeLayout(layout, { travelSteps: 7, steerSteps: 9 });
     const poser = cornerPoser(layout);
     a.envelope.travelMm.forEach((t, i) => {
-      a.envelope.rackMm.forEach((s, j) => {
+      a.envelope.steerInput.forEach((s, j) => {
         const joint = a.envelope.jointAngleDeg[i]![j];
         const p = cornerPoseAt(poser, t, s);
         if (joint === null) {
@@ -64,7 +64,7 @@ describe("cornerPoseAt agrees with analyzeLayout", () => {
     for (const [t, s] of [[-8, -4], [0, 5], [12, 9.5], [6, -7]] as const) {
       const w = cornerPoseAt(poser, t, s).left;
       expect(w.steerSolved).toBe(true);
-      const len = Math.hypot(w.steeringArmBall[0] - w.rackEnd[0], w.steeringArmBall[1] - w.rackEnd[1], w.steeringArmBall[2] - w.rackEnd[2]);
+      const len = Math.hypot(w.steeringArmBall[0] - w.tieRodInner[0], w.steeringArmBall[1] - w.tieRodInner[1], w.steeringArmBall[2] - w.tieRodInner[2]);
       expectNear(len, poser.tieRodLengthMm, 1e-9, `tie rod at ${t}, ${s}`);
     }
   });

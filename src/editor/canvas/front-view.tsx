@@ -22,7 +22,7 @@ export function FrontView() {
   const fault = useEditor((s) => s.live.fault);
   // Low priority: during a drag the readouts paint first, the drawing's figures follow a frame later.
   const analysis = useDeferredValue(useEditor((s) => s.live.analysis));
-  const previewing = useEditor((s) => s.preview.rackMm !== 0 || s.preview.travelMm !== 0);
+  const previewing = useEditor((s) => s.preview.steerInput !== 0 || s.preview.travelMm !== 0);
   const box = useMemo(() => frontBox(layout), [layout]);
   const binding = pose ? previewBinding(pose, layout, analysis) : null;
   const scene = frontScene({

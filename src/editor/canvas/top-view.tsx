@@ -1,6 +1,6 @@
 "use client";
-// The top view (x–y, seen from above, in line with the front view; forward is down the screen), drawn from
-// the shared scene (src/drawing/top-scene.ts): the same drawing the exports make.
+// The top view (x–y, seen from above, in line with the front view; forward is down the screen): the rack or
+// the bellcranks, both wheels and the turning construction, drawn from the shared scene (src/drawing/top-scene.ts): the same drawing the exports make.
 import { useDeferredValue, useMemo } from "react";
 import { topBox } from "@/drawing/corner-drawing";
 import { CLEARANCE_COLOUR, INK } from "@/drawing/drawing-colours";
@@ -13,7 +13,6 @@ import { useShownPose } from "./use-shown-pose";
 import { ViewFrame } from "./view-frame";
 import { BindingNote, FaultNote } from "./view-notes";
 
-const HANDLES = handlesOf("top");
 
 export function TopView() {
   const { layout, pose, error } = useShownPose();
@@ -22,8 +21,9 @@ export function TopView() {
   const fault = useEditor((s) => s.live.fault);
   // Low priority: during a drag the readouts paint first, the drawing's figures follow a frame later.
   const analysis = useDeferredValue(useEditor((s) => s.live.analysis));
-  const previewing = useEditor((s) => s.preview.rackMm !== 0 || s.preview.travelMm !== 0);
+  const previewing = useEditor((s) => s.preview.steerInput !== 0 || s.preview.travelMm !== 0);
   const box = useMemo(() => topBox(layout), [layout]);
+  const handles = useMemo(() => handlesOf("top", layout), [layout]);
   const binding = pose ? previewBinding(pose, layout, analysis) : null;
   const scene = topScene({
     layout,
@@ -41,7 +41,7 @@ export function TopView() {
       title={scene.title}
       axes={scene.axes}
       box={box}
-      handles={HANDLES}
+      handles={handles}
       notes={
         <>
           {fault || error ? <FaultNote message={fault?.message ?? error!} /> : null}

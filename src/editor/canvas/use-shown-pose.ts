@@ -3,6 +3,7 @@
 import { useMemo } from "react";
 import type { Layout } from "@/contracts/layout";
 import { cornerPoseAt, cornerPoser, GeometryError, type CornerPose, type CornerPoser } from "@/engine";
+import { steerInputTravel } from "@/figures/steer-input";
 import { selectShownLayout } from "../store/editor-store";
 import { useEditor } from "../store/editor-context";
 
@@ -24,19 +25,20 @@ function poserOf(layout: Layout): { poser: CornerPoser | null; error: string | n
 
 export function useShownPose(): ShownPose {
   const layout = useEditor(selectShownLayout);
-  const rack = useEditor((s) => s.preview.rackMm);
+  const input = useEditor((s) => s.preview.steerInput);
   const travel = useEditor((s) => s.preview.travelMm);
   const prepared = useMemo(() => poserOf(layout), [layout]);
   return useMemo(() => {
     if (!prepared.poser) return { layout, pose: null, error: prepared.error };
     const f = layout.frontView;
     const t = Math.min(f.bumpTravelMm, Math.max(-f.droopTravelMm, travel));
-    const s = Math.min(layout.topView.steeringInput.travelMm, Math.max(-layout.topView.steeringInput.travelMm, rack));
+    const end = steerInputTravel(layout);
+    const s = Math.min(end, Math.max(-end, input));
     try {
       return { layout, pose: cornerPoseAt(prepared.poser, t, s), error: null };
     } catch (e) {
       if (e instanceof GeometryError) return { layout, pose: null, error: e.message };
       throw e;
     }
-  }, [layout, prepared, rack, travel]);
+  }, [layout, prepared, input, travel]);
 }

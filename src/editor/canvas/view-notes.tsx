@@ -13,9 +13,9 @@ export function bindingText(b: PreviewBinding): string | null {
     case "joint":
       return `Binds (${b.wheel} wheel): ${limitLabel(b.by)} at ${fmt(b.limitDeg, 1, "°")} — joint at ${fmt(b.angleDeg, 1, "°")}`;
     case "tie-rod":
-      return `Binds (${b.wheel} wheel): the tie rod cannot reach the steering arm here`;
-    case "rack-end":
-      return "End of rack travel";
+      return `Binds (${b.wheel} wheel): the tie rod is over centre (in line with the steering arm) here`;
+    case "input-end":
+      return `End of ${b.input} travel`;
     default:
       return null;
   }
@@ -24,6 +24,6 @@ export function bindingText(b: PreviewBinding): string | null {
 export function BindingNote({ binding }: { binding: PreviewBinding }) {
   const text = bindingText(binding);
   if (!text) return null;
-  const tone = binding.kind === "rack-end" ? "text-ink bg-white/90" : "text-red-800 bg-red-50/95";
+  const tone = binding.kind === "input-end" ? "text-ink bg-white/90" : "text-red-800 bg-red-50/95";
   return <p className={`mt-0.5 rounded px-1.5 py-0.5 font-medium ${tone}`} data-testid="view-binding">{text}</p>;
 }

@@ -48,11 +48,11 @@ const CHARTS: readonly ChartDef[] = [
   },
   {
     id: "joint",
-    title: "Joint angle over rack travel",
-    description: "At ride height; the larger of the two wheels' joint angles.",
-    x: lengthAxisUnit,
+    title: "Joint angle over steer",
+    description: "At ride height, against the left wheel's road-wheel angle (+ left), so rack and bellcrank kits share the axis; the larger of the two wheels' joint angles.",
+    x: () => "°",
     y: () => "°",
-    series: (a, u) => a.steering.steps.map((s) => ({ x: chartLength(s.rackMm, u), y: chartValue(Math.max(s.leftJointAngleDeg, s.rightJointAngleDeg)) })),
+    series: (a) => a.steering.steps.map((s) => ({ x: chartValue(s.leftRoadWheelDeg), y: chartValue(Math.max(s.leftJointAngleDeg, s.rightJointAngleDeg)) })),
   },
   {
     id: "ackermann",

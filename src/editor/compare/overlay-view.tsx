@@ -33,7 +33,7 @@ interface Posed {
 function poseOf(item: ComparedItem, steer: OverlaySteer): CornerPose | null {
   if (!item.layout) return null;
   try {
-    const rack = steer === "lock" && item.analysis ? item.analysis.steerLock.static.rackMm : 0;
+    const rack = steer === "lock" && item.analysis ? item.analysis.steerLock.static.steerInput : 0;
     return cornerPoseAt(cornerPoser(item.layout), 0, rack);
   } catch (e) {
     if (e instanceof GeometryError) return null;
@@ -87,7 +87,8 @@ function TopItem({ t, p }: { t: ViewTransform; p: Posed }) {
           <Line t={t} points={band(w.shaft[0], w.shaft[1], p.layout.drive.neckDiameterMm)} closed colour={s.colour} dash={s.dash} width={1.5} />
         </g>
       ))}
-      <Line t={t} points={d.rack} colour={s.colour} dash={s.dash} width={3} />
+      {d.rack ? <Line t={t} points={d.rack} colour={s.colour} dash={s.dash} width={3} /> : null}
+      {d.bellcranks.map((b, k) => <Line key={k} t={t} points={b.arm} colour={s.colour} dash={s.dash} width={3} />)}
     </g>
   );
 }

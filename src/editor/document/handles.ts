@@ -19,7 +19,8 @@ export type PartId =
   | "neck"
   | "cup"
   | "kingpin"
-  | "strength";
+  | "strength"
+  | "bellcrank";
 
 interface AxisField {
   readonly path: LayoutPath;
@@ -36,6 +37,8 @@ export interface HandleDef {
   readonly part: PartId;
   readonly u: AxisField;
   readonly v: AxisField;
+  /** Shown only for layouts this is true of (a bellcrank's pivot exists only with a bellcrank input). */
+  readonly when?: (layout: Layout) => boolean;
 }
 
 const yz = (id: string, label: string, part: PartId, base: string): HandleDef => ({
@@ -65,7 +68,8 @@ export const HANDLES: readonly HandleDef[] = [
   yz("inboardJoint", "Inboard joint (outdrive)", "shaft", "drive.inboardJoint"),
   yz("outboardJoint", "Outboard joint", "shaft", "drive.outboardJoint"),
   xy("steeringArmBall", "Steering arm ball", "steeringArm", "topView.steeringArmBall"),
-  xy("rackEnd", "Tie-rod inner ball (rack end)", "tieRod", "topView.rackEnd"),
+  xy("tieRodInner", "Tie-rod inner ball", "tieRod", "topView.tieRodInner"),
+  { ...xy("bellcrankPivot", "Bellcrank pivot", "bellcrank", "topView.steeringInput.pivot"), when: (l) => l.topView.steeringInput.kind === "bellcrank" },
   xy("inboardJoint", "Inboard joint (outdrive)", "shaft", "drive.inboardJoint"),
   xy("outboardJoint", "Outboard joint", "shaft", "drive.outboardJoint"),
 ];
@@ -76,8 +80,9 @@ export function handleById(id: string): HandleDef | undefined {
   return BY_ID.get(id);
 }
 
-export function handlesOf(view: ViewId): readonly HandleDef[] {
-  return HANDLES.filter((h) => h.view === view);
+/** The handles of a view; with a layout, only those that apply to it. */
+export function handlesOf(view: ViewId, layout?: Layout): readonly HandleDef[] {
+  return HANDLES.filter((h) => h.view === view && (!layout || !h.when || h.when(layout)));
 }
 
 function axisValue(layout: Layout, a: AxisField): number {

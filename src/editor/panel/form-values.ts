@@ -33,6 +33,10 @@ const VARIANT_STARTS: Record<string, number | string | boolean> = {
   "strength.material.source": "",
   "strength.material.shearRule": "distortion-energy",
   "drive.slotLimitDeg": 30,
+  "topView.steeringInput.travelMm": 6.5,
+  "topView.steeringInput.pivot.x": -5,
+  "topView.steeringInput.pivot.y": 35,
+  "topView.steeringInput.travelDeg": 25,
 };
 
 function numberText(v: number, f: FieldDef, unit: LengthUnit): string {
@@ -97,7 +101,7 @@ export type FormResult = { ok: true; layout: Layout } | { ok: false; errors: For
 export function formToLayout(values: FormValues, unit: LengthUnit, base: Layout): FormResult {
   const shown = layoutToForm(base, unit);
   const errors: FormErrors = {};
-  let doc: Record<string, unknown> = { schema: 1, topView: { steeringInput: { kind: "rack" } } };
+  let doc: Record<string, unknown> = { schema: 2 };
   const put = (path: string, v: unknown) => {
     doc = setAt(doc, path, v);
   };

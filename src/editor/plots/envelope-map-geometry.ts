@@ -1,6 +1,7 @@
 // The joint envelope as a map: cells placed by steer (the left road-wheel angle, + left turn) and travel,
-// the contour where the joint angle reaches the joint's limit, and the steer lock at each travel. Pure:
-// the map component only draws what this returns.
+// the contour where the joint angle reaches the joint's limit, the steer lock at each travel, the cells
+// the present input travel reaches past the lock, and the proposed steering stop. Pure: the map component
+// only draws what this returns.
 import type { EnvelopeResult, SteerLockResult } from "@/engine";
 
 /** One solved grid point drawn as a cell: steer from x0 to x1 (deg), travel from y0 to y1 (mm). */
@@ -98,4 +99,45 @@ export function limitContour(env: EnvelopeResult, limitDeg: number): [MapPoint, 
 export function lockLines(perTravel: readonly SteerLockResult[]): { leftTurn: MapPoint[]; rightTurn: MapPoint[] } {
   const rows = [...perTravel].filter((l) => Number.isFinite(l.innerDeg) && Number.isFinite(l.outerDeg)).sort((a, b) => a.travelMm - b.travelMm);
   return { leftTurn: rows.map((l) => [l.innerDeg, l.travelMm]), rightTurn: rows.map((l) => [-l.outerDeg, l.travelMm]) };
+}
+
+/**
+ * The cells the present input travel reaches beyond the lock at their travel: where the linkage, with no
+ * stop, drives the joint past its limit (or on towards the toggle). The lock is one input position for
+ * both turns, so a cell past it either way counts.
+ */
+export function pastLimitCells(cells: readonly EnvelopeCell[], env: EnvelopeResult, perTravel: readonly SteerLockResult[]): EnvelopeCell[] {
+  return cells.filter((c) => {
+    const lock = perTravel[c.i];
+    const q = env.steerInput[c.j];
+    if (!lock || q === undefined) return false;
+    return Math.abs(q) > Math.abs(lock.steerInput) * (1 + 1e-9) + 1e-12;
+  });
+}
+
+/** The left wheel's road-wheel angle at input q on row i, by linear interpolation between grid columns; null where unsolved. */
+function roadAt(env: EnvelopeResult, i: number, q: number): number | null {
+  const xs = env.steerInput;
+  const row = env.leftRoadWheelDeg[i] ?? [];
+  for (let j = 0; j + 1 < xs.length; j++) {
+    const a = xs[j]!;
+    const b = xs[j + 1]!;
+    if ((q - a) * (q - b) > 0) continue;
+    const ra = row[j];
+    const rb = row[j + 1];
+    if (ra === null || ra === undefined || rb === null || rb === undefined) return null;
+    const t = a === b ? 0 : (q - a) / (b - a);
+    return ra + t * (rb - ra);
+  }
+  return null;
+}
+
+/** The proposed stop drawn across the travel rows: the left wheel's angle with the input at the stop, each turn. */
+export function stopLines(env: EnvelopeResult, leftTurnStopInput: number): { leftTurn: MapPoint[]; rightTurn: MapPoint[] } {
+  const line = (q: number): MapPoint[] =>
+    env.travelMm.flatMap((t, i) => {
+      const r = roadAt(env, i, q);
+      return r === null ? [] : [[r, t] as MapPoint];
+    });
+  return { leftTurn: line(leftTurnStopInput), rightTurn: line(-leftTurnStopInput) };
 }

@@ -1,12 +1,14 @@
 "use client";
 // The drive joint's operating angle over steer × travel as a coloured map (analysis.envelope), with the
-// contour where it reaches the joint's limit and the steer lock at each travel (analysis.steerLock).
+// contour where it reaches the joint's limit, the steer lock at each travel (analysis.steerLock), the cells
+// the present input travel drives past the limit (hatched) and the proposed steering stop.
 import { scaleLinear, scaleSequential } from "d3-scale";
 import { interpolateViridis } from "d3-scale-chromatic";
 import { useId, useMemo, useState } from "react";
 import type { AnalysisResult } from "@/engine";
 import { mmToUnit, type LengthUnit } from "@/figures/length-unit";
-import { envelopeCells, limitContour, lockLines, type EnvelopeCell, type MapPoint } from "./envelope-map-geometry";
+import { formatSteerInput, steerInputWord } from "@/figures/steer-input";
+import { envelopeCells, limitContour, lockLines, pastLimitCells, stopLines, type EnvelopeCell, type MapPoint } from "./envelope-map-geometry";
 import { PlotCard, PlotEmpty } from "./plot-card";
 import { figureText, lengthAxisUnit, SERIES } from "./plot-data";
 
@@ -31,6 +33,7 @@ export function JointEnvelopeMap({ analysis, lengthUnit, stale }: JointEnvelopeM
   const rawId = useId();
   const gradientId = `envelope-ramp-${rawId.replace(/[^a-zA-Z0-9_-]/g, "")}`;
   const summaryId = `${gradientId}-summary`;
+  const hatchId = `${gradientId}-past`;
   const [hover, setHover] = useState<EnvelopeCell | null>(null);
   const model = useMemo(() => (analysis ? envelopeModel(analysis, lengthUnit) : null), [analysis, lengthUnit]);
   const u = lengthAxisUnit(lengthUnit);
@@ -48,11 +51,21 @@ export function JointEnvelopeMap({ analysis, lengthUnit, stale }: JointEnvelopeM
                 <linearGradient id={gradientId} x1="0" x2="1" y1="0" y2="0">
                   {model.rampStops.map((s) => <stop key={s.offset} offset={s.offset} stopColor={s.colour} />)}
                 </linearGradient>
+                <pattern id={hatchId} width={6} height={6} patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
+                  <rect width={6} height={6} fill="#ffffff" opacity={0.35} />
+                  <line x1={0} y1={0} x2={0} y2={6} stroke="#7f1d1d" strokeWidth={2} />
+                </pattern>
               </defs>
               <g data-testid="envelope-cells">
                 {model.cells.map((c) => (
                   <rect key={`${c.i}-${c.j}`} data-cell="" x={model.x(c.x0)} y={model.y(c.y1)} width={Math.max(0.5, model.x(c.x1) - model.x(c.x0))} height={Math.max(0.5, model.y(c.y0) - model.y(c.y1))}
                     fill={model.colour(c.jointAngleDeg)} onMouseEnter={() => setHover(c)} />
+                ))}
+              </g>
+              <g data-testid="envelope-past-limit" data-count={model.past.length}>
+                {model.past.map((c) => (
+                  <rect key={`p${c.i}-${c.j}`} x={model.x(c.x0)} y={model.y(c.y1)} width={Math.max(0.5, model.x(c.x1) - model.x(c.x0))} height={Math.max(0.5, model.y(c.y0) - model.y(c.y1))}
+                    fill={`url(#${hatchId})`} pointerEvents="none" />
                 ))}
               </g>
               <g data-testid="envelope-limit-contour" fill="none" strokeLinecap="round">
@@ -67,6 +80,16 @@ export function JointEnvelopeMap({ analysis, lengthUnit, stale }: JointEnvelopeM
                   </g>
                 ))}
               </g>
+              {model.stopLeft ? (
+                <g data-testid="envelope-stop-line" fill="none">
+                  {[model.stopLeft, model.stopRight].map((pts, k) => (
+                    <g key={k}>
+                      <polyline points={pts ?? ""} stroke="#fff" strokeWidth={4} />
+                      <polyline points={pts ?? ""} stroke={SERIES.good} strokeWidth={2} />
+                    </g>
+                  ))}
+                </g>
+              ) : null}
               <g fontSize={11} fill="currentColor" className="text-ink">
                 <line x1={M.left} x2={W - M.right} y1={H - M.bottom} y2={H - M.bottom} stroke="#0006" />
                 <line x1={M.left} x2={M.left} y1={M.top} y2={H - M.bottom} stroke="#0006" />
@@ -86,9 +109,9 @@ export function JointEnvelopeMap({ analysis, lengthUnit, stale }: JointEnvelopeM
                 <text transform={`translate(12 ${(M.top + H - M.bottom) / 2}) rotate(-90)`} textAnchor="middle">{`travel,${u} (+ bump)`}</text>
               </g>
             </svg>
-            <EnvelopeLegend model={model} gradientId={gradientId} />
-            <p id={summaryId} className="mt-1 text-xs text-ink-muted">
-              {`Largest joint angle within the steer lock ${figureText(analysis.drive.maxJointAngleWithinLockDeg, 1)}°; limit ${figureText(analysis.drive.jointLimitDeg, 1)}°, set by ${LIMIT_BY[analysis.drive.jointLimitBy]}. Blank cells: the tie rod cannot reach.`}
+            <EnvelopeLegend model={model} gradientId={gradientId} hatchId={hatchId} inputWord={steerInputWord(analysis.steering.input.kind)} />
+            <p id={summaryId} className="mt-1 text-xs text-ink-muted" data-testid="envelope-summary">
+              {`Largest joint angle within the steer lock ${figureText(analysis.drive.maxJointAngleWithinLockDeg, 1)}°; limit ${figureText(analysis.drive.jointLimitDeg, 1)}°, set by ${LIMIT_BY[analysis.drive.jointLimitBy]}. ${pastText(analysis, lengthUnit)} Blank cells: the tie rod cannot reach (past its toggle).`}
             </p>
             <p className="text-xs tabular-nums text-ink" data-testid="envelope-hover">
               {hover
@@ -102,7 +125,17 @@ export function JointEnvelopeMap({ analysis, lengthUnit, stale }: JointEnvelopeM
   );
 }
 
-function EnvelopeLegend({ model, gradientId }: { model: EnvelopeModel; gradientId: string }) {
+/** The hatched cells and the stop, in words (the summary the map is described by). */
+function pastText(a: AnalysisResult, unit: LengthUnit): string {
+  const s = a.steeringStop;
+  const kind = a.steering.input.kind;
+  const word = steerInputWord(kind);
+  if (s.status === "not-needed") return `The ${word}'s travel ends before the limit: nothing is hatched and no stop is needed.`;
+  if (s.status === "no-position") return "The joint is past its limit with the wheels straight at some travel: no stop can help.";
+  return `Hatched: where the ${word} as drawn (±${formatSteerInput(a.steering.input.travel, kind, unit, 2)}) drives the joint past its limit. Green: the proposed stop at ${formatSteerInput(Math.abs(s.leftTurnStopInput), kind, unit, 2)} each side.`;
+}
+
+function EnvelopeLegend({ model, gradientId, hatchId, inputWord }: { model: EnvelopeModel; gradientId: string; hatchId: string; inputWord: string }) {
   const lx = scaleLinear().domain(model.colourDomain).range([8, LEGEND_W - 8]);
   return (
     <div data-testid="envelope-legend" className="mt-1 flex flex-wrap items-center gap-x-4 gap-y-1 text-xs text-ink">
@@ -121,6 +154,18 @@ function EnvelopeLegend({ model, gradientId }: { model: EnvelopeModel; gradientI
         <svg width={22} height={8} aria-hidden="true"><line x1={1} x2={21} y1={4} y2={4} stroke="#111" strokeWidth={1.75} strokeDasharray="5 3" /></svg>
         <span>steer lock</span>
       </span>
+      {model.past.length ? (
+        <span className="inline-flex items-center gap-1">
+          <svg width={16} height={12} aria-hidden="true"><rect width={16} height={12} fill={`url(#${hatchId})`} stroke="#7f1d1d" strokeWidth={0.5} /></svg>
+          <span>{`past the limit: the ${inputWord} as drawn reaches here`}</span>
+        </span>
+      ) : null}
+      {model.stopLeft ? (
+        <span className="inline-flex items-center gap-1">
+          <svg width={22} height={8} aria-hidden="true"><line x1={1} x2={21} y1={4} y2={4} stroke={SERIES.good} strokeWidth={2} /></svg>
+          <span style={{ color: SERIES.good }}>proposed stop</span>
+        </span>
+      ) : null}
     </div>
   );
 }
@@ -146,8 +191,12 @@ function envelopeModel(a: AnalysisResult, unit: LengthUnit) {
   const toSvg = (p: MapPoint) => [x(p[0]), y(p[1])] as const;
   const poly = (pts: MapPoint[]) => pts.map((p) => toSvg(p).map((v) => v.toFixed(1)).join(",")).join(" ");
   const yTicks = yUnit.ticks(6);
+  const stop = a.steeringStop.status === "needed" ? stopLines(a.envelope, a.steeringStop.leftTurnStopInput) : null;
   return {
     cells,
+    past: pastLimitCells(cells, a.envelope, a.steerLock.perTravel),
+    stopLeft: stop && stop.leftTurn.length > 1 ? poly(stop.leftTurn) : null,
+    stopRight: stop && stop.rightTurn.length > 1 ? poly(stop.rightTurn) : null,
     x,
     y,
     /** A travel already in the user's unit (the axis ticks) to svg y. */

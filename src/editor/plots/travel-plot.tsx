@@ -1,10 +1,11 @@
 "use client";
 // Camber and roll-centre height against wheel travel (analysis.travel, rack centred).
-import { CartesianGrid, Legend, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
+import { CartesianGrid, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import type { AnalysisResult } from "@/engine";
 import type { LengthUnit } from "@/figures/length-unit";
 import { PlotCard, PlotEmpty } from "./plot-card";
 import { chartLength, chartValue, lengthAxisUnit, SERIES } from "./plot-data";
+import { SeriesLegend } from "./series-legend";
 
 export interface TravelPlotProps {
   readonly analysis: AnalysisResult | null;
@@ -31,7 +32,8 @@ export function TravelPlot({ analysis, lengthUnit, stale }: TravelPlotProps) {
         rows.length < 2 ? (
           <PlotEmpty>No travel figures yet: the layout has not been analysed.</PlotEmpty>
         ) : (
-          <div className="h-60">
+          <div>
+          <div className="h-56">
             <ResponsiveContainer width="100%" height="100%" initialDimension={{ width: 480, height: 240 }}>
               <LineChart data={rows} margin={{ left: 0, right: 8, top: 4, bottom: 4 }} aria-labelledby={captionId}>
                 <CartesianGrid strokeDasharray="3 3" stroke="#0001" />
@@ -39,12 +41,13 @@ export function TravelPlot({ analysis, lengthUnit, stale }: TravelPlotProps) {
                 <YAxis yAxisId="camber" fontSize={11} unit="°" width={48} />
                 <YAxis yAxisId="rc" orientation="right" fontSize={11} unit={u} width={56} />
                 <Tooltip />
-                <Legend wrapperStyle={{ fontSize: 11 }} />
                 <ReferenceLine yAxisId="camber" x={0} stroke="#0003" />
-                <Line yAxisId="camber" type="monotone" dataKey="camber" name="camber °" stroke={SERIES.steel} dot={false} isAnimationActive={false} />
-                <Line yAxisId="rc" type="monotone" dataKey="rollCentre" name={`roll centre${u}`} stroke={SERIES.signal} strokeDasharray="6 3" dot={false} isAnimationActive={false} />
+                <Line yAxisId="camber" type="monotone" dataKey="camber" name="camber (°)" stroke={SERIES.steel} dot={false} isAnimationActive={false} />
+                <Line yAxisId="rc" type="monotone" dataKey="rollCentre" name={`roll-centre height (${u.trim()})`} stroke={SERIES.signal} strokeDasharray="6 3" dot={false} isAnimationActive={false} />
               </LineChart>
             </ResponsiveContainer>
+          </div>
+          <SeriesLegend series={[{ name: "camber (°)", colour: SERIES.steel }, { name: `roll-centre height (${u.trim()})`, colour: SERIES.signal, dash: "6 3" }]} />
           </div>
         )
       }

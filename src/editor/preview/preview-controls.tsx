@@ -4,6 +4,7 @@
 import { useEffect, useId, useRef } from "react";
 import { Button } from "@/components/ui/button";
 import { useEditor, useEditorStore } from "../store/editor-context";
+import { formatSteerInput, steerInputTravel } from "@/figures/steer-input";
 import { formatLength } from "@/figures/length-unit";
 import { sweepAt } from "./sweep-path";
 
@@ -33,7 +34,7 @@ function Slider({ label, value, min, max, step, text, onChange, testId }: {
         onChange={(e) => onChange(Number(e.target.value))}
         className="h-1.5 flex-1 accent-steel"
       />
-      <output htmlFor={id} className="w-20 shrink-0 text-right text-xs tabular-nums">{text}</output>
+      <output htmlFor={id} className="w-28 shrink-0 text-right text-xs tabular-nums">{text}</output>
     </div>
   );
 }
@@ -42,13 +43,14 @@ export function PreviewControls() {
   const store = useEditorStore();
   const preview = useEditor((s) => s.preview);
   const unit = useEditor((s) => s.settings.lengthUnit);
-  const rackMax = useEditor((s) => (s.draft ?? s.layout).topView.steeringInput.travelMm);
+  const inputMax = useEditor((s) => steerInputTravel(s.draft ?? s.layout));
+  const inputKind = useEditor((s) => (s.draft ?? s.layout).topView.steeringInput.kind);
   const droop = useEditor((s) => (s.draft ?? s.layout).frontView.droopTravelMm);
   const bump = useEditor((s) => (s.draft ?? s.layout).frontView.bumpTravelMm);
-  const range = useRef({ rackMm: rackMax, droopMm: droop, bumpMm: bump });
+  const range = useRef({ steerInput: inputMax, droopMm: droop, bumpMm: bump });
   useEffect(() => {
-    range.current = { rackMm: rackMax, droopMm: droop, bumpMm: bump };
-  }, [rackMax, droop, bump]);
+    range.current = { steerInput: inputMax, droopMm: droop, bumpMm: bump };
+  }, [inputMax, droop, bump]);
 
   useEffect(() => {
     if (!preview.sweeping) return;
@@ -62,19 +64,23 @@ export function PreviewControls() {
     return () => cancelAnimationFrame(frame);
   }, [preview.sweeping, store]);
 
-  const set = (p: { rackMm?: number; travelMm?: number }) => store.getState().setPreview({ ...p, sweeping: false });
-  const rackText = preview.rackMm === 0 ? "centred" : `${formatLength(Math.abs(preview.rackMm), unit, 1)} ${preview.rackMm > 0 ? "left" : "right"}`;
+  const set = (p: { steerInput?: number; travelMm?: number }) => store.getState().setPreview({ ...p, sweeping: false });
+  // A rack moves left or right; a bellcrank turns anticlockwise or clockwise (seen from above).
+  const inputText =
+    preview.steerInput === 0
+      ? "centred"
+      : `${formatSteerInput(Math.abs(preview.steerInput), inputKind, unit, 2)} ${inputKind === "rack" ? (preview.steerInput > 0 ? "left" : "right") : preview.steerInput > 0 ? "anticlockwise" : "clockwise"}`;
   const travelText = preview.travelMm === 0 ? "static" : `${formatLength(Math.abs(preview.travelMm), unit, 1)} ${preview.travelMm > 0 ? "bump" : "droop"}`;
 
   return (
     <div role="group" aria-label="Preview of motion" className="flex flex-wrap items-center gap-x-4 gap-y-1 border-b border-ink/10 bg-white px-3 py-1.5">
-      <Slider label="Steer" testId="preview-steer" value={preview.rackMm} min={-rackMax} max={rackMax} step={rackMax / 50} text={rackText} onChange={(rackMm) => set({ rackMm })} />
+      <Slider label="Steer" testId="preview-steer" value={preview.steerInput} min={-inputMax} max={inputMax} step={inputMax / 50} text={inputText} onChange={(steerInput) => set({ steerInput })} />
       <Slider label="Travel" testId="preview-travel" value={preview.travelMm} min={-droop} max={bump} step={(droop + bump) / 50} text={travelText} onChange={(travelMm) => set({ travelMm })} />
       <div className="flex gap-1">
         <Button variant="secondary" aria-pressed={preview.sweeping} onClick={() => store.getState().setPreview({ sweeping: !preview.sweeping })}>
           {preview.sweeping ? "Stop sweep" : "Sweep"}
         </Button>
-        <Button variant="ghost" onClick={() => store.getState().setPreview({ rackMm: 0, travelMm: 0, sweeping: false })} disabled={!preview.sweeping && preview.rackMm === 0 && preview.travelMm === 0}>
+        <Button variant="ghost" onClick={() => store.getState().setPreview({ steerInput: 0, travelMm: 0, sweeping: false })} disabled={!preview.sweeping && preview.steerInput === 0 && preview.travelMm === 0}>
           Straight, static
         </Button>
       </div>

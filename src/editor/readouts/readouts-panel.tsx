@@ -1,8 +1,10 @@
 "use client";
 // The live figures: rendered with the page from the server's analysis, then replaced by the worker's as
 // the designer edits. When the layout is impossible the last valid figures stay, marked out of date.
+// Every label links to its methods entry and explains itself on hover and keyboard focus.
 import { useKitTargets } from "../library/library-context";
 import { judgeReadoutGroups } from "../library/readout-verdicts";
+import { ExplainedLabel, methodHref } from "@/components/ui/explained-label";
 import { useEditor } from "../store/editor-context";
 import { readoutGroups, zeroLockNote } from "@/figures/readout-figures";
 
@@ -32,12 +34,15 @@ export function ReadoutsPanel() {
               <dl className="grid grid-cols-2 gap-1.5">
                 {g.readouts.map((r) => (
                   <div key={r.id} className="rounded border border-ink/10 bg-white px-2 py-1">
-                    <dt className="text-[11px] text-ink-muted">{r.label}</dt>
+                    <dt className="text-[11px] text-ink-muted">
+                      <ExplainedLabel label={r.label} explain={r.explain} href={methodHref(r.method)} testId={`explain-${r.id}`} />
+                    </dt>
                     <dd data-testid={r.id} className={`text-base font-semibold tabular-nums ${r.tone === "bad" ? "text-red-700" : r.tone === "good" ? "text-emerald-700" : "text-ink"}`}>{r.value}</dd>
                     {r.hint ? <dd className="text-[11px] leading-tight text-ink-muted">{r.hint}</dd> : null}
                   </div>
                 ))}
               </dl>
+              {g.note ? <p data-testid={`note-${g.id}`} className="mt-1 rounded bg-amber-50 px-2 py-1 text-[11px] leading-snug text-amber-950">{g.note}</p> : null}
             </section>
           ))}
           {a.warnings.length ? (

@@ -64,8 +64,8 @@ export interface EditorSettings {
 }
 
 export interface Preview {
-  /** Rack displacement shown, mm (+ towards +y). */
-  readonly rackMm: number;
+  /** Steering input shown: rack mm (+ towards +y) or bellcrank degrees (+ counter-clockwise from above). */
+  readonly steerInput: number;
   /** Wheel travel shown, mm (+ bump). */
   readonly travelMm: number;
   readonly sweeping: boolean;
@@ -136,7 +136,7 @@ export function createEditorStore(init: EditorInit): EditorStore {
         savedJson: JSON.stringify(init.layout),
         draft: null,
         selectedHandle: null,
-        preview: { rackMm: 0, travelMm: 0, sweeping: false },
+        preview: { steerInput: 0, travelMm: 0, sweeping: false },
         settings: {
           gridStepMm: init.gridStepMm ?? DEFAULT_GRID_STEP_MM,
           lengthUnit: init.lengthUnit,

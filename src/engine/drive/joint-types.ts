@@ -1,7 +1,7 @@
 /**
  * The kinds of outboard drive joint a small car uses, with a typical rated operating angle and where that
- * figure comes from (REFERENCES §1.6). These are catalogue-style guides: the geometric limit from the neck in
- * the cup (neck-contact.ts) is the figure to trust (REFERENCES §1.6 recommendation [C]).
+ * figure comes from (by citation key). These are catalogue-style guides: the geometric limit from the neck in
+ * the cup (neck-contact.ts) is the figure to trust (common practice).
  */
 import { GeometryError } from "../errors";
 import type { FigureSource } from "../provenance";
@@ -25,7 +25,7 @@ export interface DriveJointType {
   readonly note: string;
 }
 
-const NO_SOURCE_RC = "no published source found; RC practice as recalled (REFERENCES §1.6 [C]/[M])";
+const NO_SOURCE_RC: FigureSource = { note: "no published source found; RC practice as recalled", cites: ["common-practice"] };
 
 /** The joint kinds and their figures. */
 export const DRIVE_JOINT_TYPES: Readonly<Record<DriveJointKind, DriveJointType>> = {
@@ -34,7 +34,7 @@ export const DRIVE_JOINT_TYPES: Readonly<Record<DriveJointKind, DriveJointType>>
     label: "Dogbone (ball or barrel end with cross pin in a slotted cup)",
     typicalRatedAngleDeg: 30,
     ratedAngleRangeDeg: [25, 35],
-    ratedAngleSource: { provenance: ["common-practice", "from-memory"], citation: NO_SOURCE_RC },
+    ratedAngleSource: NO_SOURCE_RC,
     plunges: true,
     hasSpeedFluctuation: true,
     note: "each end acts like a cardan joint; binding or the bone leaving the cup depends on cup depth and plunge",
@@ -44,7 +44,7 @@ export const DRIVE_JOINT_TYPES: Readonly<Record<DriveJointKind, DriveJointType>>
     label: "CVD (cross pin inside a cup plus a separate stub-axle joint)",
     typicalRatedAngleDeg: 40,
     ratedAngleRangeDeg: [40, 45],
-    ratedAngleSource: { provenance: ["common-practice", "from-memory"], citation: NO_SOURCE_RC },
+    ratedAngleSource: NO_SOURCE_RC,
     plunges: true,
     hasSpeedFluctuation: false,
     note: "near constant-velocity; plunge is taken at the inboard cup (common practice)",
@@ -54,10 +54,7 @@ export const DRIVE_JOINT_TYPES: Readonly<Record<DriveJointKind, DriveJointType>>
     label: "Fixed ball-type CV joint (Rzeppa)",
     typicalRatedAngleDeg: 45,
     ratedAngleRangeDeg: [45, 48],
-    ratedAngleSource: {
-      provenance: ["found"],
-      citation: "Wikipedia 'Constant-velocity joint', citing NTN Technical Review No. 75 (2007): 45–48° typical, 54° special; via REFERENCES §1.6",
-    },
+    ratedAngleSource: { note: "Wikipedia 'Constant-velocity joint', citing NTN Technical Review No. 75 (2007): 45–48° typical, 54° special", cites: ["cv-joint-wikipedia"] },
     plunges: false,
     hasSpeedFluctuation: false,
     note: "fixed type; plunging ball joints exist but are not this kind",
@@ -67,22 +64,22 @@ export const DRIVE_JOINT_TYPES: Readonly<Record<DriveJointKind, DriveJointType>>
     label: "Single cardan (universal) joint",
     typicalRatedAngleDeg: 40,
     ratedAngleRangeDeg: [40, 45],
-    ratedAngleSource: { provenance: ["common-practice", "from-memory"], citation: NO_SOURCE_RC },
+    ratedAngleSource: NO_SOURCE_RC,
     plunges: false,
     hasSpeedFluctuation: true,
     note:
-      "industrial guidance is lower: about 45° absolute maximum and ~15° best for wear (sallei.com [F]); " +
-      "design practice < 25°, yoke interference near 37.5° (cgtrader text [F]), via REFERENCES §1.6",
+      "industrial guidance is lower: about 45° absolute maximum and ~15° best for wear (sallei-universal-joint); " +
+      "design practice keeps it lower still (common-practice)",
   },
   "double-cardan": {
     kind: "double-cardan",
     label: "Double cardan (high-angle universal) joint",
     typicalRatedAngleDeg: 50,
     ratedAngleRangeDeg: [50, 60],
-    ratedAngleSource: { provenance: ["common-practice", "from-memory"], citation: NO_SOURCE_RC },
+    ratedAngleSource: NO_SOURCE_RC,
     plunges: false,
     hasSpeedFluctuation: false,
-    note: "constant-velocity only while the centring keeps both half-angles equal; automotive ≈ 45–50° (REFERENCES §1.6 [M])",
+    note: "constant-velocity only while the centring keeps both half-angles equal; automotive ≈ 45–50°, a value from memory (common-practice)",
   },
 };
 

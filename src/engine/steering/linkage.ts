@@ -88,42 +88,120 @@ export function knuckleRotationForClosureRads(closure: TieRodClosure, branch: 1 
   return angleNormalizeRads(Math.atan2(closure.b, closure.a) - branch * Math.acos(clampUnit(closure.c / rho)));
 }
 
+/** The two kinds of steering input: a rack (position in mm along y) or a bellcrank (angle in degrees about a vertical pivot). */
+export type SteerInputKind = "rack" | "bellcrank";
+
 /**
- * A rack-driven corner at one suspension pose, ready for fast solves: the closure coefficients are
- * linear/quadratic in the rack displacement s (mm, + = rack end moves to +y):
- * A(s) = a0 + aS·s, B(s) = b0 + bS·s, C(s) = c0 + cS·s − s².
+ * A steered corner at one suspension pose, ready for fast solves at steering-input position q (rack mm,
+ * + = rack end moves to +y; or bellcrank degrees, + = counter-clockwise seen from above). The tie-rod
+ * closure's coefficients are linear in two basis functions of q (see inputBasis):
+ * X(q) = x0 + x1·p1(q) + x2·p2(q) for X = A, B, C.
+ * Rack: (p1, p2) = (s, s²). Bellcrank: (p1, p2) = (cos θ − 1, sin θ).
  */
-export interface RackLinkage {
+export interface InputLinkage {
+  readonly kind: SteerInputKind;
   readonly a0: number;
-  readonly aS: number;
+  readonly a1: number;
+  readonly a2: number;
   readonly b0: number;
-  readonly bS: number;
+  readonly b1: number;
+  readonly b2: number;
   readonly c0: number;
-  readonly cS: number;
+  readonly c1: number;
+  readonly c2: number;
   readonly branch: 1 | -1;
 }
 
-/** Builds the rack linkage for an arm-ball circle, the rack end at centre rack, a tie-rod length (mm) and a branch. */
-export function rackLinkage(circle: ArmBallCircle, rackEnd: Vec3, tieRodLengthMm: number, branch: 1 | -1): RackLinkage {
+/** The basis (p1, p2) of a steering input at q: rack (s, s²) with s in mm; bellcrank (cos θ − 1, sin θ) with θ = q degrees. */
+export function inputBasis(kind: SteerInputKind, q: number): readonly [number, number] {
+  if (kind === "rack") return [q, q * q];
+  const t = (q * Math.PI) / 180;
+  return [Math.cos(t) - 1, Math.sin(t)];
+}
+
+/**
+ * A rack: the tie-rod inner ball at rackEnd + s·ŷ. Expanding |Ball(φ) − Q(s)|² = l² with e = centre − Q(0):
+ * A = A0 − 2s·u_y, B = B0 − 2s·v_y, C = C0 + 2s·e_y − s².
+ */
+export function rackLinkage(circle: ArmBallCircle, rackEnd: Vec3, tieRodLengthMm: number, branch: 1 | -1): InputLinkage {
   const base = tieRodClosure(circle, rackEnd, tieRodLengthMm);
   const e1 = circle.centre[1] - rackEnd[1];
-  return { a0: base.a, aS: -2 * circle.radial[1], b0: base.b, bS: -2 * circle.tangent[1], c0: base.c, cS: 2 * e1, branch };
+  return { kind: "rack", a0: base.a, a1: -2 * circle.radial[1], a2: 0, b0: base.b, b1: -2 * circle.tangent[1], b2: 0, c0: base.c, c1: 2 * e1, c2: -1, branch };
+}
+
+/**
+ * A bellcrank turning about a vertical axis through `pivot`: the tie-rod inner ball at
+ * Q(θ) = Q0 + (cos θ − 1)·r + sin θ·t, where r is the horizontal arm from the pivot to Q0 and t = ẑ × r
+ * (same length ρ). With e0 = centre − Q0, and because r ⊥ t, |(cos θ − 1)r + sin θ t|² = −2(cos θ − 1)ρ²:
+ * A = A0 − 2p1 r·u − 2p2 t·u, B likewise with v, C = C0 + 2p1 (e0·r + ρ²) + 2p2 e0·t.
+ * Throws when the inner ball sits on the pivot's axis (no arm to turn it).
+ */
+export function bellcrankLinkage(circle: ArmBallCircle, innerBall: Vec3, pivot: Vec3, tieRodLengthMm: number, branch: 1 | -1): InputLinkage {
+  const base = tieRodClosure(circle, innerBall, tieRodLengthMm);
+  const r: Vec3 = [innerBall[0] - pivot[0], innerBall[1] - pivot[1], 0];
+  const rho2 = r[0] * r[0] + r[1] * r[1];
+  if (!(rho2 > 1e-6)) throw new GeometryError("bellcrank", "the tie-rod inner ball sits on the bellcrank pivot's axis: the bellcrank arm has no length");
+  const t: Vec3 = [-r[1], r[0], 0];
+  const e0: Vec3 = [circle.centre[0] - innerBall[0], circle.centre[1] - innerBall[1], circle.centre[2] - innerBall[2]];
+  const dot = (p: Vec3, q: Vec3) => p[0] * q[0] + p[1] * q[1] + p[2] * q[2];
+  const u = circle.radial;
+  const v = circle.tangent;
+  return {
+    kind: "bellcrank",
+    a0: base.a,
+    a1: -2 * dot(r, u),
+    a2: -2 * dot(t, u),
+    b0: base.b,
+    b1: -2 * dot(r, v),
+    b2: -2 * dot(t, v),
+    c0: base.c,
+    c1: 2 * (dot(e0, r) + rho2),
+    c2: 2 * dot(e0, t),
+    branch,
+  };
+}
+
+/** Where the tie-rod inner ball is at input q (rack mm, bellcrank degrees), for drawing and checks. */
+export function innerBallAt(kind: SteerInputKind, innerBall: Vec3, pivot: Vec3 | null, q: number): Vec3 {
+  if (kind === "rack" || !pivot) return [innerBall[0], innerBall[1] + q, innerBall[2]];
+  const rx = innerBall[0] - pivot[0];
+  const ry = innerBall[1] - pivot[1];
+  const c = Math.cos((q * Math.PI) / 180);
+  const s = Math.sin((q * Math.PI) / 180);
+  return [pivot[0] + rx * c - ry * s, pivot[1] + rx * s + ry * c, innerBall[2]];
+}
+
+/** Closure coefficients of an input linkage at input q (rack mm, bellcrank degrees). */
+export function inputClosureAt(l: InputLinkage, q: number): TieRodClosure {
+  const [p1, p2] = inputBasis(l.kind, q);
+  return { a: l.a0 + l.a1 * p1 + l.a2 * p2, b: l.b0 + l.b1 * p1 + l.b2 * p2, c: l.c0 + l.c1 * p1 + l.c2 * p2 };
 }
 
 /** Closure coefficients of a rack linkage at rack displacement s (mm). */
-export function rackClosureAt(l: RackLinkage, rackMm: number): TieRodClosure {
-  return { a: l.a0 + l.aS * rackMm, b: l.b0 + l.bS * rackMm, c: l.c0 + l.cS * rackMm - rackMm * rackMm };
+export function rackClosureAt(l: InputLinkage, rackMm: number): TieRodClosure {
+  return inputClosureAt(l, rackMm);
 }
 
-/** Reach margin A² + B² − C² (mm⁴) at rack displacement s: ≥ 0 where the tie rod reaches, 0 at toggle. */
-export function rackReachMargin(l: RackLinkage, rackMm: number): number {
-  const a = l.a0 + l.aS * rackMm;
-  const b = l.b0 + l.bS * rackMm;
-  const c = l.c0 + l.cS * rackMm - rackMm * rackMm;
+/**
+ * Reach margin A² + B² − C² (mm⁴) at input q: ≥ 0 where the tie rod reaches, 0 at toggle (the tie rod in
+ * line with the steering arm: the input can go no further), < 0 past it.
+ */
+export function inputReachMargin(l: InputLinkage, q: number): number {
+  const { a, b, c } = inputClosureAt(l, q);
   return a * a + b * b - c * c;
 }
 
+/** Reach margin at rack displacement s (mm); see inputReachMargin. */
+export function rackReachMargin(l: InputLinkage, rackMm: number): number {
+  return inputReachMargin(l, rackMm);
+}
+
+/** Knuckle rotation (radians, + left) at input q, or null where the tie rod cannot reach. */
+export function knuckleRotationForInputRads(l: InputLinkage, q: number): number | null {
+  return knuckleRotationForClosureRads(inputClosureAt(l, q), l.branch);
+}
+
 /** Knuckle rotation (radians, + left) at rack displacement s (mm), or null where the tie rod cannot reach. */
-export function knuckleRotationForRackRads(l: RackLinkage, rackMm: number): number | null {
-  return knuckleRotationForClosureRads(rackClosureAt(l, rackMm), l.branch);
+export function knuckleRotationForRackRads(l: InputLinkage, rackMm: number): number | null {
+  return knuckleRotationForInputRads(l, rackMm);
 }

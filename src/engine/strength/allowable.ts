@@ -1,22 +1,27 @@
 /**
  * Allowable shear stress of a shaft material, MPa, with the source of the rule and of the figure.
  *
- * Distortion energy (von Mises): S_sy = S_y / √3 ≈ 0.577 S_y — [F] Budynas & Nisbett, Shigley's Mechanical
- * Engineering Design, 9th ed., §5-5, eqs. (5-20)/(5-21), via REFERENCES §6.1. Maximum shear stress (Tresca):
- * S_sy = 0.5 S_y, the named, more conservative alternative. Printed polymers: the same rule applied to the
- * derated across-layer strength — an extrapolation of a ductile-metal criterion to a bond line, kept only to
- * give a definite rule (REFERENCES §6.3 caution [C]).
+ * Distortion energy (von Mises): S_sy = S_y / √3 ≈ 0.577 S_y — Budynas & Nisbett, Shigley's Mechanical
+ * Engineering Design, 9th ed., §5-5, eqs. (5-20)/(5-21) (citation key shigley-mde-9e). Maximum shear stress
+ * (Tresca): S_sy = 0.5 S_y, the named, more conservative alternative. Printed polymers: the same rule applied
+ * to the derated across-layer strength — an extrapolation of a ductile-metal criterion to a bond line, kept
+ * only to give a definite rule (common practice).
+ *
+ * The `source` line names every citation by its key in brackets-free form "(key)"; `citations` lists them.
  */
 import { GeometryError } from "../errors";
 import { finiteResult, requirePositive } from "../drive/guards";
+import type { FigureSource } from "../provenance";
 import type { MaterialFigure } from "./materials";
 
 export type ShearCriterion = "distortion-energy" | "tresca";
 
 const CRITERION_SOURCE: Readonly<Record<ShearCriterion, string>> = {
-  "distortion-energy": "S_sy = S_y/√3 (distortion energy; Shigley's Mechanical Engineering Design 9th ed. §5-5 eq. 5-21)",
-  tresca: "S_sy = 0.5 S_y (maximum shear stress / Tresca, the comparison Shigley's 9th ed. draws beside §5-5 eq. 5-21)",
+  "distortion-energy": "S_sy = S_y/√3, distortion energy (shigley-mde-9e)",
+  tresca: "S_sy = 0.5 S_y, maximum shear stress, the comparison drawn beside the distortion-energy rule (shigley-mde-9e)",
 };
+
+const keys = (src: FigureSource) => src.cites.map((k) => `(${k})`).join(" ");
 
 /** Shear yield strength from tensile yield S_y (MPa, > 0) by the chosen criterion, MPa. */
 export function shearYieldFromTensileMpa(tensileYieldMpa: number, criterion: ShearCriterion = "distortion-energy"): number {
@@ -36,8 +41,10 @@ export interface AllowableShear {
   readonly criterion: ShearCriterion;
   /** 1 for metals. */
   readonly derateFactor: number;
-  /** One line naming the rule and the figure's source. */
+  /** One line naming the rule and the figure's source, each by its citation key. */
   readonly source: string;
+  /** The citation keys the line names, rule first. */
+  readonly citations: readonly string[];
 }
 
 /**
@@ -54,7 +61,8 @@ export function allowableShear(material: MaterialFigure, criterion: ShearCriteri
       basis: "tensile-yield",
       criterion,
       derateFactor: 1,
-      source: `${CRITERION_SOURCE[criterion]}; S_y ${basis} MPa of ${material.name}: ${material.strengthSource.citation}`,
+      source: `${CRITERION_SOURCE[criterion]}; S_y ${basis} MPa of ${material.name}: ${material.strengthSource.note} ${keys(material.strengthSource)}`,
+      citations: [...new Set(["shigley-mde-9e", ...material.strengthSource.cites])],
     };
   }
   if (material.kind !== "printed") throw new GeometryError("material", "material kind must be metal or printed");
@@ -70,6 +78,7 @@ export function allowableShear(material: MaterialFigure, criterion: ShearCriteri
     derateFactor: derate,
     source:
       `${CRITERION_SOURCE[criterion]} applied to the across-layer strength ${strength} MPa × derate ${derate} ` +
-      `of ${material.name}: ${material.strengthSource.citation}; derate: ${material.derateSource.citation}`,
+      `of ${material.name}: ${material.strengthSource.note} ${keys(material.strengthSource)}; derate: ${material.derateSource.note} ${keys(material.derateSource)}`,
+    citations: [...new Set(["shigley-mde-9e", ...material.strengthSource.cites, ...material.derateSource.cites])],
   };
 }

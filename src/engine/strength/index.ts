@@ -64,7 +64,10 @@ export interface StrengthResult {
   /** τ_max at the neck surface, MPa. */
   readonly shearStressMpa: number;
   readonly allowableShearMpa: number;
+  /** The rule and the material's figure, each naming its citation key in parentheses. */
   readonly allowableSource: string;
+  /** Citation keys (anchors of the methods page) of the rule and the figure. */
+  readonly allowableCitations: readonly string[];
   readonly allowableCriterion: ShearCriterion;
   readonly allowableBasis: "tensile-yield" | "across-layer-derated";
   /** allowable / τ_max, dimensionless, > 0. */
@@ -136,6 +139,7 @@ export function analyzeStrength(input: StrengthInput): StrengthResult {
     shearStressMpa: actual.shearStressMpa,
     allowableShearMpa: allowable.allowableShearMpa,
     allowableSource: allowable.source,
+    allowableCitations: allowable.citations,
     allowableCriterion: criterion,
     allowableBasis: allowable.basis,
     safetyFactor: actual.safetyFactor,

@@ -1,5 +1,5 @@
 /**
- * Strength figures of shaft materials, each with its source as REFERENCES §7 tags it.
+ * Strength figures of shaft materials, each with its source named by citation key (methods/citations.ts).
  * Stresses and moduli in MPa. Figures are typical or minimum values of the named condition, not guarantees:
  * a designer should replace them with the supplier's certificate or datasheet.
  */
@@ -26,7 +26,7 @@ export interface MetalFigure extends MaterialCommon {
 
 /**
  * A printed polymer: the check uses its across-layer (Z, upright) strength — the layer bond carries the
- * torsional shear of a neck whatever the print orientation (REFERENCES §6.3) — times a derate factor in (0, 1].
+ * torsional shear of a neck whatever the print orientation — times a derate factor in (0, 1].
  */
 export interface PrintedFigure extends MaterialCommon {
   readonly kind: "printed";
@@ -45,21 +45,18 @@ export interface PrintedFigure extends MaterialCommon {
 
 export type MaterialFigure = MetalFigure | PrintedFigure;
 
-const EFUNDA_4140: FigureSource = {
-  provenance: ["found"],
-  citation: "efunda, AISI 4140 alloy steel properties (https://www.efunda.com), via REFERENCES §7.2",
-};
-const STEEL_G: FigureSource = { provenance: ["from-memory"], citation: "steel G ≈ 80 GPa, REFERENCES §7.2 [M]" };
-const ALUMINIUM_G: FigureSource = { provenance: ["from-memory"], citation: "aluminium G ≈ 26–27 GPa, REFERENCES §7.2 [M]" };
+const EFUNDA_4140: FigureSource = { note: "efunda, AISI 4140 alloy steel properties", cites: ["efunda-aisi-4140"] };
+const STEEL_G: FigureSource = { note: "steel G ≈ 80 GPa, a value from memory", cites: ["common-practice"] };
+const ALUMINIUM_G: FigureSource = { note: "aluminium G ≈ 26–27 GPa, a value from memory", cites: ["common-practice"] };
 const PRINT_DERATE: FigureSource = {
-  provenance: ["common-practice"],
-  citation: "engineering judgement for print-to-print scatter, no published source; change it to suit your process",
+  note: "engineering judgement for print-to-print scatter, no published source; change it to suit your process",
+  cites: ["common-practice"],
 };
 // Polymer G from E/(2(1 + ν)) with ν ≈ 0.35 (a textbook figure for polymers, from memory) and the low end of E.
 const polymerShearModulus = (youngsMpa: number): number => Math.round(youngsMpa / (2 * (1 + 0.35)));
-const POLYMER_G = (what: string): FigureSource => ({
-  provenance: ["derived", "from-memory"],
-  citation: `G = E / (2(1 + ν)) with ${what} and ν ≈ 0.35 (from memory); printed parts are anisotropic, so treat as rough`,
+const POLYMER_G = (what: string, cite: string): FigureSource => ({
+  note: `G = E / (2(1 + ν)) with ${what} and ν ≈ 0.35 (a value from memory); printed parts are anisotropic, so treat as rough`,
+  cites: [cite, "common-practice"],
 });
 
 function steel4140(id: string, condition: string, yieldMpa: number, ultimateMpa: number): MetalFigure {
@@ -75,7 +72,7 @@ function steel4140(id: string, condition: string, yieldMpa: number, ultimateMpa:
   };
 }
 
-/** The built-in materials table (REFERENCES §7.1, §7.2). */
+/** The built-in materials table. */
 export const MATERIALS: readonly MaterialFigure[] = [
   steel4140("aisi-4140-annealed", "annealed 815 °C", 417.1, 655.0),
   steel4140("aisi-4140-normalized", "normalised 870 °C", 655.0, 1020.4),
@@ -89,7 +86,7 @@ export const MATERIALS: readonly MaterialFigure[] = [
     name: "AISI 1045 (≈ JIS S45C), cold drawn and annealed round bar",
     yieldStrengthMpa: 505,
     ultimateStrengthMpa: 585,
-    strengthSource: { provenance: ["found"], citation: "materials database extract listing S45C as equivalent (weak source), via REFERENCES §7.2" },
+    strengthSource: { note: "materials database extract listing S45C as equivalent (weak source)", cites: ["szfco-s45c"] },
     shearModulusMpa: 80_000,
     shearModulusSource: STEEL_G,
   },
@@ -99,7 +96,7 @@ export const MATERIALS: readonly MaterialFigure[] = [
     name: "JIS S45C to JIS G4051, normalised (minimum)",
     yieldStrengthMpa: 345,
     ultimateStrengthMpa: 570,
-    strengthSource: { provenance: ["from-memory"], citation: "JIS G4051 minimum, REFERENCES §7.2 [M] — check the standard" },
+    strengthSource: { note: "JIS G4051 minimum, recalled — check the standard", cites: ["jis-g4051"] },
     shearModulusMpa: 80_000,
     shearModulusSource: STEEL_G,
   },
@@ -109,7 +106,7 @@ export const MATERIALS: readonly MaterialFigure[] = [
     name: "JIS S45C, quenched and tempered (minimum)",
     yieldStrengthMpa: 490,
     ultimateStrengthMpa: 690,
-    strengthSource: { provenance: ["from-memory"], citation: "JIS G4051 minimum, REFERENCES §7.2 [M] — check the standard" },
+    strengthSource: { note: "JIS G4051 minimum, recalled — check the standard", cites: ["jis-g4051"] },
     shearModulusMpa: 80_000,
     shearModulusSource: STEEL_G,
   },
@@ -119,7 +116,7 @@ export const MATERIALS: readonly MaterialFigure[] = [
     name: "Aluminium 7075-T6 / T651",
     yieldStrengthMpa: 503,
     ultimateStrengthMpa: 572,
-    strengthSource: { provenance: ["found"], citation: "substech 7075 data sheet; MMPDS allowables via amesweb, REFERENCES §7.2" },
+    strengthSource: { note: "SubsTech 7075 data sheet; MMPDS allowables on AmesWeb", cites: ["substech-7075", "amesweb-7075"] },
     shearModulusMpa: 26_900,
     shearModulusSource: ALUMINIUM_G,
   },
@@ -131,11 +128,11 @@ export const MATERIALS: readonly MaterialFigure[] = [
     acrossLayerStrengthMpa: 35,
     acrossLayerRangeMpa: [35, 45],
     inPlaneStrengthMpa: 50,
-    strengthSource: { provenance: ["found"], citation: "additive.tools PLA, aggregated ranges across sources, via REFERENCES §7.1" },
+    strengthSource: { note: "additive.tools PLA, aggregated ranges across sources", cites: ["additive-tools-pla"] },
     derateFactor: 0.8,
     derateSource: PRINT_DERATE,
     shearModulusMpa: polymerShearModulus(3000),
-    shearModulusSource: POLYMER_G("E = 3 GPa (low end, additive.tools)"),
+    shearModulusSource: POLYMER_G("E = 3 GPa (low end, additive.tools)", "additive-tools-pla"),
   },
   {
     kind: "printed",
@@ -145,11 +142,11 @@ export const MATERIALS: readonly MaterialFigure[] = [
     acrossLayerStrengthMpa: 25,
     acrossLayerRangeMpa: [25, 38],
     inPlaneStrengthMpa: 44,
-    strengthSource: { provenance: ["found"], citation: "additive.tools PETG, aggregated ranges across sources, via REFERENCES §7.1" },
+    strengthSource: { note: "additive.tools PETG, aggregated ranges across sources", cites: ["additive-tools-petg"] },
     derateFactor: 0.8,
     derateSource: PRINT_DERATE,
     shearModulusMpa: polymerShearModulus(2000),
-    shearModulusSource: POLYMER_G("E = 2 GPa (low end, additive.tools)"),
+    shearModulusSource: POLYMER_G("E = 2 GPa (low end, additive.tools)", "additive-tools-petg"),
   },
   {
     kind: "printed",
@@ -159,8 +156,8 @@ export const MATERIALS: readonly MaterialFigure[] = [
     acrossLayerStrengthMpa: 8.78,
     inPlaneStrengthMpa: 27.71,
     strengthSource: {
-      provenance: ["found"],
-      citation: "Babiș et al., Technologies 2025, 13(10), 456 — vertical prints, about 0.32 × the strongest orientation; via REFERENCES §7.1",
+      note: "Babiș et al., Technologies 2025, 13(10), 456 — vertical prints, about 0.32 × the strongest orientation",
+      cites: ["babis-2025-pa12cf"],
     },
     derateFactor: 0.8,
     derateSource: PRINT_DERATE,
@@ -173,7 +170,7 @@ export const MATERIALS: readonly MaterialFigure[] = [
     acrossLayerStrengthMpa: 38,
     acrossLayerRangeMpa: [38, 50],
     inPlaneStrengthMpa: 46,
-    strengthSource: { provenance: ["found"], citation: "additive.tools PA12-CF (SLS), Z yield range, via REFERENCES §7.1" },
+    strengthSource: { note: "additive.tools PA12-CF (SLS), Z yield range", cites: ["additive-tools-pa12-cf"] },
     derateFactor: 0.8,
     derateSource: PRINT_DERATE,
   },

@@ -1,4 +1,4 @@
-import { TARNWICK_10_BASE, TARNWICK_10_CARDAN, TARNWICK_10_CVD, TARNWICK_10_PRINTED, TARNWICK_10_THIN_NECK } from "@/contracts/demo-layouts";
+import { TARNWICK_10_BASE, TARNWICK_10_BELLCRANK, TARNWICK_10_CARDAN, TARNWICK_10_CVD, TARNWICK_10_PRINTED, TARNWICK_10_THIN_NECK } from "@/contracts/demo-layouts";
 import type { Layout } from "@/contracts/layout";
 import type { JointSpec, MaterialSpec, ShaftSpec } from "@/contracts/shelf";
 import type { TargetOverrides, Targets } from "@/contracts/targets";
@@ -127,6 +127,17 @@ export const DEMO_KITS: readonly DemoKit[] = [
     targets: { maxJointAngleDeg: 42 },
     revisions: [
       { layout: TARNWICK_10_CARDAN, note: "Hollow 7075 shaft, 2 mm bore. The club accepts 42° on this joint after the jig test.", by: "editor", daysAgo: 5 },
+    ],
+  },
+  {
+    key: "tarnwick-10-bellcrank",
+    name: "Tarnwick 10 — bellcrank steering",
+    scale: "1:10",
+    notes: "Bellcrank pair and drag link in place of the rack; same 5.0 mm dogbone as the baseline.",
+    tags: ["steel", "bellcrank"],
+    from: { key: "tarnwick-10-base", revision: 3 },
+    revisions: [
+      { layout: TARNWICK_10_BELLCRANK, note: "Bellcranks in place of the rack: the servo saver moves to the centre line.", by: "owner", daysAgo: 3 },
     ],
   },
   {

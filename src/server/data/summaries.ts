@@ -1,5 +1,5 @@
 import "server-only";
-import { summarizeAnalysis, type StoredSummary } from "@/contracts/revisions";
+import { failedSummary, summarizeAnalysis, type StoredSummary } from "@/contracts/revisions";
 import type { AnalysisResult } from "@/engine";
 import { runAnalysisJob, type AnalysisOutcome } from "../analysis/analysis-job";
 import { AnalysisBusyError, runAnalysis } from "../analysis/pool";
@@ -17,7 +17,7 @@ export async function summarizeLayout(layout: unknown): Promise<StoredSummary> {
     if (!(error instanceof AnalysisBusyError)) throw error;
     outcome = runAnalysisJob({ layout });
   }
-  if (!outcome.ok) return { ok: false, reason: outcome.message };
+  if (!outcome.ok) return failedSummary(outcome.message);
   const { analysis } = JSON.parse(outcome.json) as { analysis: AnalysisResult };
   return { ok: true, ...summarizeAnalysis(analysis) };
 }

@@ -16,7 +16,7 @@ import type { ExportKit } from "./export-kit";
 import { drawMarks } from "./pdf-marks";
 import { SHEET_FONTS, SHEET_FONT_REGULAR_PATH, fittingSize, paperText, plain, sheetBoldFont } from "./sheet-fonts";
 import { INK, MARGIN, MUTED, PT_PER_MM, PT_PER_PX, RULE, chooseScale, pageSize, scaleText, titleBlock, viewFrames, type Rect } from "./sheet-page";
-import { SOURCE_TAGS, figureSign, sheetSources } from "./sheet-sources";
+import { SOURCE_KEYS_NOTE, figureSign, sheetSources } from "./sheet-sources";
 
 export interface SheetOptions {
   readonly paper: PaperSize;
@@ -163,8 +163,8 @@ function tablesPages(doc: Doc, kit: ExportKit, o: SheetOptions): void {
       row(doc, f, cells);
     }
   }
-  f.heading("Sources of the formulas");
-  row(doc, f, [{ text: SOURCE_TAGS, x: 0, w: W, size: 6.5, colour: MUTED }]);
+  f.heading("Sources");
+  row(doc, f, [{ text: SOURCE_KEYS_NOTE, x: 0, w: W, size: 6.5, colour: MUTED }]);
   for (const s of sheetSources(a, groups.flatMap((g) => g.readouts))) {
     row(doc, f, [{ text: s.figure, x: 0, w: W * 0.3, size: 7 }, { text: s.source, x: W * 0.3 + 4, w: W * 0.7 - 4, size: 7 }]);
   }

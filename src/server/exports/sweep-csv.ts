@@ -1,6 +1,7 @@
 import "server-only";
 // The sweeps as CSV, one header row naming each column's unit: the steer × travel envelope of the drive
-// joint (both wheels, the right one the mirror of the left at the opposite rack), and the travel sweep.
+// joint (both wheels, the right one the mirror of the left at the opposite input position), and the travel
+// sweep. A rack's positions are lengths in the user's unit; a bellcrank's are degrees.
 import { stringify } from "csv-stringify/sync";
 import { neckClearanceMm, type AnalysisResult } from "@/engine";
 import type { Layout } from "@/contracts/layout";
@@ -22,9 +23,9 @@ function csv(header: readonly string[], rows: readonly Cell[][]): string {
   return stringify([header as string[], ...rows], { cast: { number: (n) => String(n) }, record_delimiter: "\n" });
 }
 
-export const ENVELOPE_COLUMNS = (unit: LengthUnit) => [
+export const ENVELOPE_COLUMNS = (unit: LengthUnit, input: "rack" | "bellcrank" = "rack") => [
   `travel_${unit}`,
-  `rack_${unit}`,
+  input === "rack" ? `rack_${unit}` : "bellcrank_deg",
   "left_road_wheel_deg",
   "right_road_wheel_deg",
   "left_joint_angle_deg",
@@ -34,7 +35,7 @@ export const ENVELOPE_COLUMNS = (unit: LengthUnit) => [
 ] as const;
 
 /**
- * One row per grid point, travel outer (droop to bump), rack inner. Road-wheel angles + left; joint angles
+ * One row per grid point, travel outer (droop to bump), steering input inner. Road-wheel angles + left; joint angles
  * ≥ 0; neck clearance (D/2)cos β − a sin β − d/2, + clear (empty for a slotted cup).
  */
 export function envelopeCsv(layout: Layout, analysis: AnalysisResult, unit: LengthUnit): string {
@@ -42,7 +43,9 @@ export function envelopeCsv(layout: Layout, analysis: AnalysisResult, unit: Leng
   const d = layout.drive;
   const cup = { mouthDiameterMm: d.cupMouthDiameterMm, neckDiameterMm: d.neckDiameterMm, pivotDepthMm: d.pivotDepthMm };
   const gap = (beta: number | null) => (beta === null || d.slottedCup || beta > 90 ? null : neckClearanceMm(cup, beta));
-  const n = env.rackMm.length;
+  const input = analysis.steering.input.kind;
+  const position = (q: number) => (input === "rack" ? lengthCell(q, unit) : angleCell(q));
+  const n = env.steerInput.length;
   const rows: Cell[][] = [];
   env.travelMm.forEach((travel, i) => {
     const joints = env.jointAngleDeg[i]!;
@@ -52,10 +55,10 @@ export function envelopeCsv(layout: Layout, analysis: AnalysisResult, unit: Leng
       const rightRoad = roads[m] === null || roads[m] === undefined ? null : -roads[m]!;
       const left = joints[j] ?? null;
       const right = joints[m] ?? null;
-      rows.push([lengthCell(travel, unit), lengthCell(env.rackMm[j]!, unit), angleCell(roads[j] ?? null), angleCell(rightRoad), angleCell(left), angleCell(right), lengthCell(gap(left), unit), lengthCell(gap(right), unit)]);
+      rows.push([lengthCell(travel, unit), position(env.steerInput[j]!), angleCell(roads[j] ?? null), angleCell(rightRoad), angleCell(left), angleCell(right), lengthCell(gap(left), unit), lengthCell(gap(right), unit)]);
     }
   });
-  return csv(ENVELOPE_COLUMNS(unit), rows);
+  return csv(ENVELOPE_COLUMNS(unit, input), rows);
 }
 
 export const TRAVEL_COLUMNS = (unit: LengthUnit) => [

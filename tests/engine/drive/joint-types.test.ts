@@ -13,16 +13,17 @@ describe("drive joint kinds — REFERENCES §1.6", () => {
     }
   });
 
-  it("the fixed ball CV figure is the published one: 45–48° (Wikipedia citing NTN TR 75 [F, via REFERENCES §1.6])", () => {
+  it("the fixed ball CV figure is the published one: 45–48° (Wikipedia 'Constant-velocity joint', citing NTN Technical Review No. 75)", () => {
     const cv = driveJointType("cv-ball");
     expect(cv.ratedAngleRangeDeg).toEqual([45, 48]);
-    expect(cv.ratedAngleSource.provenance).toEqual(["found"]);
+    expect(cv.ratedAngleSource.cites).toEqual(["cv-joint-wikipedia"]);
     expect(cv.hasSpeedFluctuation).toBe(false);
   });
 
-  it("RC joint figures have no published source and say so: common practice and from memory (REFERENCES §1.6 [C]/[M])", () => {
+  it("RC joint figures have no published source and say so: common practice, recalled", () => {
     for (const kind of ["dogbone", "cvd", "single-cardan", "double-cardan"] as const) {
-      expect(driveJointType(kind).ratedAngleSource.provenance).toEqual(["common-practice", "from-memory"]);
+      expect(driveJointType(kind).ratedAngleSource.cites).toEqual(["common-practice"]);
+      expect(driveJointType(kind).ratedAngleSource.note).toMatch(/no published source/);
     }
     expect(driveJointType("dogbone").ratedAngleRangeDeg).toEqual([25, 35]);
     expect(driveJointType("double-cardan").ratedAngleRangeDeg).toEqual([50, 60]);

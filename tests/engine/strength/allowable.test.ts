@@ -1,3 +1,4 @@
+import { isCitationKey } from "@/engine/methods/citations";
 import { describe, expect, it } from "vitest";
 import { allowableShear, shearYieldFromTensileMpa } from "@/engine/strength/allowable";
 import { MATERIALS, materialById, type PrintedFigure } from "@/engine/strength/materials";
@@ -31,8 +32,9 @@ describe("allowable shear of the table's materials", () => {
     expectRelClose(a.allowableShearMpa, 378.16);
     expect(a.basis).toBe("tensile-yield");
     expect(a.derateFactor).toBe(1);
-    expect(a.source).toContain("Shigley");
+    expect(a.source).toContain("(shigley-mde-9e)");
     expect(a.source).toContain("efunda");
+    expect(a.citations).toEqual(["shigley-mde-9e", "efunda-aisi-4140"]);
   });
 
   it("a printed material uses its across-layer strength × derate, then the criterion (REFERENCES §6.3 caution [C])", () => {
@@ -54,8 +56,9 @@ describe("allowable shear of the table's materials", () => {
   it("every table entry has a source, a positive strength and a valid derate", () => {
     expect(new Set(MATERIALS.map((m) => m.id)).size).toBe(MATERIALS.length);
     for (const m of MATERIALS) {
-      expect(m.strengthSource.citation.length).toBeGreaterThan(10);
-      expect(m.strengthSource.provenance.length).toBeGreaterThan(0);
+      expect(m.strengthSource.note.length).toBeGreaterThan(10);
+      expect(m.strengthSource.cites.length).toBeGreaterThan(0);
+      for (const key of m.strengthSource.cites) expect(isCitationKey(key), key).toBe(true);
       const a = allowableShear(m);
       expect(a.allowableShearMpa).toBeGreaterThan(0);
       if (m.kind === "printed") expect(m.derateFactor).toBeGreaterThan(0);

@@ -26,7 +26,8 @@ describe("analyzeStrength — the whole chain", () => {
     expectRelClose(r.safetyFactor, 10.8214);
     expect(r.meetsTarget).toBe(true);
     expect(r.targetSafetyFactor).toBe(2);
-    expect(r.allowableSource).toContain("Shigley");
+    expect(r.allowableSource).toContain("(shigley-mde-9e)");
+    expect(r.allowableCitations[0]).toBe("shigley-mde-9e");
     // twist: 857.7·40/(80 000·π·5⁴/32) rad (§6.1), by hand 0.006989 rad = 0.40045°
     expectRelClose(r.twistDeg ?? 0, 0.40045, 1e-4);
     // default what-if: the neck ± 0.5 and ± 1 mm

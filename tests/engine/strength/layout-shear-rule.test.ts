@@ -25,6 +25,6 @@ describe("the shear rule of a layout's own material", () => {
     expect(tr.allowableCriterion).toBe("tresca");
     expectRelClose(tr.allowableShearMpa, 400);
     expectRelClose(tr.safetyFactor / de.safetyFactor, Math.sqrt(3) / 2);
-    expect(tr.allowableSource).toContain("Tresca");
+    expect(tr.allowableSource).toContain("maximum shear stress"); // the Tresca criterion, in the words the methods page uses
   });
 });

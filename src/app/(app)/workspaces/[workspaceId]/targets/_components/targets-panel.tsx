@@ -19,7 +19,7 @@ const HINTS: Record<TargetKey, string> = {
   minSafetyFactor: "Shaft neck in torsion: allowable over working shear",
   ackermannMinPct: "At lock; 100 % = the wheel axes meet on the rear axle line, 0 % = parallel",
   ackermannMaxPct: "",
-  minNeckClearanceMm: "Neck to cup mouth inside the lock (a slotted cup is not judged)",
+  minNeckClearanceMm: "Neck to cup mouth at the proposed steering stop (a slotted cup is not judged)",
 };
 
 const toText = (t: Targets) => Object.fromEntries(TARGET_KEYS.map((k) => [k, String(t[k])])) as Record<TargetKey, string>;

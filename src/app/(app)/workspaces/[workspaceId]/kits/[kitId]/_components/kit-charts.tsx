@@ -1,10 +1,11 @@
 "use client";
 import { useId } from "react";
-import { CartesianGrid, Legend, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
-import type { SteerLockResult, SteerStepResult, TravelStepResult } from "@/engine";
+import { CartesianGrid, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
+import type { SteerInputResult, SteerLockResult, SteerStepResult, TravelStepResult } from "@/engine";
+import { SeriesLegend } from "@/editor/plots/series-legend";
 
 // Series colours are also the legend's text colour: each must reach 4.5:1 on white (steel 7.2:1, signal 5.2:1).
-type Series = { key: string; name: string; colour: string; axis?: "right" };
+type Series = { key: string; name: string; colour: string; axis?: "right"; dash?: string };
 type Row = Record<string, number | null>;
 
 const round = (v: number | null, d = 3) => (v === null ? null : Number(v.toFixed(d)));
@@ -33,16 +34,16 @@ function ReadoutChart({ title, data, xKey, xUnit, yUnit, rightUnit, series, limi
             <YAxis yAxisId="left" fontSize={11} unit={yUnit} />
             {rightUnit ? <YAxis yAxisId="right" orientation="right" fontSize={11} unit={rightUnit} /> : null}
             <Tooltip />
-            <Legend wrapperStyle={{ fontSize: 11 }} />
             {limit !== undefined ? (
               <ReferenceLine yAxisId="left" y={Number(limit.toFixed(2))} stroke="#b91c1c" strokeDasharray="4 3" label={{ value: "limit", fontSize: 10, fill: "#b91c1c" }} />
             ) : null}
             {series.map((s) => (
-              <Line key={s.key} yAxisId={s.axis ?? "left"} type="monotone" dataKey={s.key} name={s.name} stroke={s.colour} dot={false} isAnimationActive={false} />
+              <Line key={s.key} yAxisId={s.axis ?? "left"} type="monotone" dataKey={s.key} name={s.name} stroke={s.colour} strokeDasharray={s.dash} dot={false} isAnimationActive={false} />
             ))}
           </LineChart>
         </ResponsiveContainer>
       </div>
+      <SeriesLegend series={[...series.map((s) => ({ name: s.name, colour: s.colour, dash: s.dash })), ...(limit !== undefined ? [{ name: "joint limit", colour: "#b91c1c", dash: "4 3" }] : [])]} />
     </figure>
   );
 }
@@ -51,7 +52,7 @@ export function TravelChart({ travel }: { travel: readonly TravelStepResult[] })
   const data = travel.map((t) => ({ travel: round(t.travelMm, 1), camber: round(t.camberDeg), rc: round(t.rollCentreHeightMm, 2) }));
   return (
     <ReadoutChart title="Camber and roll centre over travel" data={data} xKey="travel" xUnit=" mm" yUnit="°" rightUnit=" mm"
-      series={[{ key: "camber", name: "camber °", colour: "#3d5a73" }, { key: "rc", name: "roll centre mm", colour: "#c2410c", axis: "right" }]} />
+      series={[{ key: "camber", name: "camber (°)", colour: "#3d5a73" }, { key: "rc", name: "roll-centre height (mm)", colour: "#c2410c", axis: "right", dash: "6 3" }]} />
   );
 }
 
@@ -59,14 +60,14 @@ export function SteerLockChart({ perTravel }: { perTravel: readonly SteerLockRes
   const data = perTravel.map((l) => ({ travel: round(l.travelMm, 1), inner: round(l.innerDeg, 2), outer: round(l.outerDeg, 2) }));
   return (
     <ReadoutChart title="Steer lock over travel" data={data} xKey="travel" xUnit=" mm" yUnit="°"
-      series={[{ key: "inner", name: "inner wheel °", colour: "#3d5a73" }, { key: "outer", name: "outer wheel °", colour: "#c2410c" }]} />
+      series={[{ key: "inner", name: "inner wheel (°)", colour: "#3d5a73" }, { key: "outer", name: "outer wheel (°)", colour: "#c2410c", dash: "6 3" }]} />
   );
 }
 
-export function JointAngleChart({ steps, limitDeg }: { steps: readonly SteerStepResult[]; limitDeg: number }) {
-  const data = steps.map((s) => ({ rack: round(s.rackMm, 2), left: round(s.leftJointAngleDeg, 2), right: round(s.rightJointAngleDeg, 2) }));
+export function JointAngleChart({ steps, limitDeg, input }: { steps: readonly SteerStepResult[]; limitDeg: number; input: SteerInputResult }) {
+  const data = steps.map((s) => ({ input: round(s.steerInput, 2), left: round(s.leftJointAngleDeg, 2), right: round(s.rightJointAngleDeg, 2) }));
   return (
-    <ReadoutChart title="Joint angle over rack travel (static)" data={data} xKey="rack" xUnit=" mm" yUnit="°" limit={limitDeg}
-      series={[{ key: "left", name: "left joint °", colour: "#3d5a73" }, { key: "right", name: "right joint °", colour: "#c2410c" }]} />
+    <ReadoutChart title={`Joint angle over ${input.kind} travel (static)`} data={data} xKey="input" xUnit={input.unit === "mm" ? " mm" : "°"} yUnit="°" limit={limitDeg}
+      series={[{ key: "left", name: "left joint (°)", colour: "#3d5a73" }, { key: "right", name: "right joint (°)", colour: "#c2410c", dash: "6 3" }]} />
   );
 }

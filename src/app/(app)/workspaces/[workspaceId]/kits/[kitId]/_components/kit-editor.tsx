@@ -15,7 +15,8 @@ import { AnalysisSheet } from "./analysis-sheet";
 function LiveSheet() {
   const analysis = useEditor((s) => s.live.analysis);
   const stale = useEditor((s) => s.live.stale);
-  return <AnalysisSheet analysis={analysis} stale={stale} />;
+  const unit = useEditor((s) => s.settings.lengthUnit);
+  return <AnalysisSheet analysis={analysis} stale={stale} lengthUnit={unit} />;
 }
 
 const SIDE_TABS = [
