@@ -1,6 +1,6 @@
 // The three views of a kit as its exports draw them: the corner as laid out (ride height, straight ahead)
-// in the front and top views, and the joint section at the largest angle the joint reaches inside the
-// steer lock, where its clearance is least (the "least neck clearance" readout).
+// in the front and top views, and the joint section at the largest angle the joint reaches with the
+// proposed steering stop in place, where the neck's clearance is the "neck clearance at the stop" readout.
 import type { Layout } from "@/contracts/layout";
 import { cornerPoseAt, cornerPoser, type AnalysisResult } from "@/engine";
 import type { LengthUnit } from "@/figures/length-unit";
@@ -23,7 +23,7 @@ export function kitScenes(layout: Layout, analysis: AnalysisResult, unit: Length
     top: topScene({ layout, pose, unit, show: SHOW_ALL, detail }),
     joint: jointScene({
       layout,
-      betaDeg: analysis.drive.maxJointAngleWithinLockDeg,
+      betaDeg: analysis.steeringStop.jointAngleAtStopDeg,
       wheel: null,
       unit,
       showDimensions: true,

@@ -16,11 +16,14 @@ import * as workspacesRoute from "@/app/api/workspaces/route";
 import { DEMO_LAYOUTS, TARNWICK_10_BASE } from "@/contracts/demo-layouts";
 import { answerAnalysisRequest } from "@/editor/readouts/analysis-protocol";
 import type { AnalysisResult } from "@/engine";
+import { citationByKey } from "@/engine/methods/citations";
+import { methodByKey } from "@/engine/methods/method-entries";
 import { CAUTIONS } from "@/figures/cautions";
 import type { LengthUnit } from "@/figures/length-unit";
 import { readoutGroups } from "@/figures/readout-figures";
 import { call, download, signUp } from "../helpers/api";
 import { addMemberByInvitation } from "../helpers/invitations";
+import { OUTSIDE_REFERENCE } from "../helpers/outside-reference";
 
 type P = { workspaceId: string };
 type E = { workspaceId: string; kitId: string; file: string };
@@ -97,11 +100,15 @@ describe("the dimension sheet (PDF)", () => {
     expect(a.steerLock.worst.limitedBy).toBe("neck-contact");
     expect(text).toMatch(/What binds\s+shaft neck meets the cup mouth/);
     expect(text).toMatch(new RegExp(`Safety factor at the neck\\s+${a.strength.safetyFactor.toFixed(2)}`));
-    expect(text).toContain("Sources of the formulas");
-    expect(text).toMatch(/Scrub radius\s+Barton & Fieldhouse §3\.1\.5\.3 \[F\]/);
-    // Our own sheet of formulas is not a source the product cites.
-    expect(text).not.toMatch(/REFERENCES|DESIGN\.md/);
+    // Sources: one line per citation of the methods page, named by its key, beside the figures it serves.
     const flat = squash(text);
+    const sources = flat.slice(flat.lastIndexOf("Sources"));
+    const scrubKey = methodByKey("scrub-radius").cites[0]!;
+    expect(sources).toMatch(new RegExp(`Scrub radius.*${citationByKey(scrubKey).text.slice(0, 30).replace(/[.*+?^${}()|[\]\\]/g, "\\$&")}`));
+    expect(sources).toContain(`[${scrubKey}]`);
+    expect(sources).toContain("/methods");
+    // Nothing outside the product is cited: not our own sheet of formulas, not a provenance tag.
+    expect(text).not.toMatch(OUTSIDE_REFERENCE);
     for (const caution of CAUTIONS) expect(flat).toContain(caution);
     // The title block: workspace, author, units and the scales the views were drawn to.
     expect(text).toContain("Isa Moorcroft");
@@ -137,20 +144,20 @@ describe("the dimension sheet (PDF)", () => {
       const row = lines.find((l) => l.trimStart().startsWith(r.label) && l.includes(r.value));
       expect(row, `${r.label} = ${r.value}`).toBeDefined();
     }
-    // The drawing's own figures are the readouts' too (roll centre, scrub, trail, the least neck gap).
+    // The drawing's own figures are the readouts' too (roll centre, scrub, trail, the neck gap at the stop).
     const value = (id: string) => readouts.find((r) => r.id === id)!.value;
     const flat = squash(text);
     expect(flat).toContain(`RC ${value("roll-centre")}`);
     expect(flat).toContain(`scrub ${value("scrub")}`);
     expect(flat).toContain(`trail ${value("trail")}`);
-    if (!demo.layout.drive.slottedCup) expect(flat).toContain(`gap ${value("neck-clearance")}`);
+    if (!demo.layout.drive.slottedCup) expect(flat).toContain(`gap ${value("stop-clearance")}`);
   });
 
   it("shows lengths in inches when asked, with the readouts' inch figures", async () => {
     const res = await get("sheet.pdf", "?unit=in&orientation=landscape");
     const text = pdfText(res.bytes, "sheet-inches");
     const readouts = readoutGroups(editorAnalysis(TARNWICK_10_BASE), "in" satisfies LengthUnit).flatMap((g) => g.readouts);
-    for (const id of ["neck-clearance", "roll-centre", "scrub", "trail", "camber-gain"]) {
+    for (const id of ["stop-clearance", "roll-centre", "scrub", "trail", "camber-gain"]) {
       const r = readouts.find((x) => x.id === id)!;
       expect(r.value).toMatch(/in/);
       expect(text.split("\n").some((l) => l.trimStart().startsWith(r.label) && l.includes(r.value)), `${r.label} = ${r.value}`).toBe(true);
