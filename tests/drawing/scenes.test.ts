@@ -107,10 +107,10 @@ describe("joint section scene", () => {
 });
 
 describe("the exports' scenes", () => {
-  it.each(DEMO_LAYOUTS.map((d) => [d.key, d.layout] as const))("%s: the joint at its largest angle within lock, every item on a known layer", (_key, layout) => {
+  it.each(DEMO_LAYOUTS.map((d) => [d.key, d.layout] as const))("%s: the joint at its largest angle with the proposed stop, every item on a known layer", (_key, layout) => {
     const a = analyzeLayout(layout, { travelSteps: 21, steerSteps: 41 });
     const scenes = kitScenes(layout, a, "mm", "sheet");
-    expect(scenes.joint.summary).toContain(`Joint at ${a.drive.maxJointAngleWithinLockDeg.toFixed(1)}°`);
+    expect(scenes.joint.summary).toContain(`Joint at ${a.steeringStop.jointAngleAtStopDeg.toFixed(1)}°`);
     for (const scene of [scenes.front, scenes.top, scenes.joint]) {
       for (const i of scene.items) expect(SCENE_LAYERS).toContain(i.layer);
       expect(scene.items.every((i) => JSON.stringify(i).match(/NaN|Infinity/) === null)).toBe(true);
