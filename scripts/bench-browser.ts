@@ -165,7 +165,16 @@ try {
     await page.goto(url, { waitUntil: "commit" });
     await page.waitForFunction(() => (window as unknown as { __kbFigureAt?: number }).__kbFigureAt !== undefined, undefined, { timeout: 20_000 });
     const at = await page.evaluate(() => (window as unknown as { __kbFigureAt: number }).__kbFigureAt);
-    const paint = await page.evaluate(() => performance.getEntriesByName("first-contentful-paint")[0]?.startTime ?? Number.NaN);
+    // The paint entry can be queued after the figure is seen: wait for it (buffered) rather than read NaN.
+    const paint = await page.evaluate(
+      () =>
+        new Promise<number>((resolve) => {
+          new PerformanceObserver((list) => {
+            const fcp = list.getEntriesByName("first-contentful-paint")[0];
+            if (fcp) resolve(fcp.startTime);
+          }).observe({ type: "paint", buffered: true });
+        }),
+    );
     await page.close();
     if (i === 0) continue; // the first load pays for compiling the route's code
     // Laid out in a frame before the first contentful one still shows only from that paint on.

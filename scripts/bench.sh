@@ -5,6 +5,8 @@
 #  3. the browser benchmark (scripts/bench-browser.ts: the editor drag, the kit page), both against one
 #     production server on 127.0.0.1:3200 with its own throwaway database (.data/pg-bench on 54349),
 #     stopped afterwards.
+# KB_BENCH_BUILD=reuse serves the existing .next build instead of building (the interrupt test of
+# `npm test` stops a bench run).
 set -euo pipefail
 
 # shellcheck source=scripts/lib/runner.sh
@@ -36,7 +38,7 @@ kb_env_bench "$APP_PORT"
 unset DATABASE_URL # never benchmark against the user's database
 kb_pg_start pg-bench "$PG_PORT" fresh
 npx --no-install tsx scripts/migrate.ts
-kb_next_build || kb_die "the build failed"
+kb_next_build_or_reuse "${KB_BENCH_BUILD:-}" || kb_die "the build failed"
 kb_app_start "$APP_PORT" .data/app-bench.log || kb_die "the app did not start (log: .data/app-bench.log)"
 kb_say "HTTP benchmark against $BENCH_BASE_URL"
 npx --no-install tsx scripts/bench-http.ts

@@ -46,11 +46,7 @@ SEED_OUTPUT=$(npx --no-install tsx --conditions=react-server scripts/seed.ts) ||
   kb_die "seeding failed"
 }
 
-if [[ ${KB_DEMO_BUILD:-} == reuse && -s .next/BUILD_ID ]]; then
-  kb_say "serving the existing build (.next, KB_DEMO_BUILD=reuse)"
-else
-  kb_next_build || kb_die "the build failed (see above)"
-fi
+kb_next_build_or_reuse "${KB_DEMO_BUILD:-}" || kb_die "the build failed (see above)"
 kb_app_start "$APP_PORT" || kb_die "the app did not start (see above)"
 
 cat <<EOF

@@ -25,6 +25,11 @@ const server = createServer((req, res) => {
   void handle(req, res);
 });
 server.listen(port, values.hostname, () => console.log(`> Knucklebench on http://${values.hostname}:${port}`));
-const stop = () => server.close(() => process.exit(0));
+// Finish the requests in flight, then exit; idle keep-alive connections would hold close() for their whole
+// timeout, so they are closed at once.
+const stop = () => {
+  server.close(() => process.exit(0));
+  server.closeIdleConnections();
+};
 process.on("SIGTERM", stop);
 process.on("SIGINT", stop);

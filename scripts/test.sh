@@ -6,16 +6,27 @@
 #
 # TEST_DATABASE_URL, when set, replaces the throwaway PostgreSQL (DATABASE_URL is ignored here on
 # purpose: tests write to their database, and must not write to the one the demo or a user set up).
+# KB_TEST_FILES="a.test.ts b.test.ts" runs only those vitest files, with the same setup, and stops before
+# the build: a short run (the interrupt test stops one), with its own cluster and reports beside a full one.
+#
+# After the browser tests, the interrupt tests (tests/interrupt/) start `npm run demo`, `npm test` (with
+# KB_TEST_FILES) and `npm run bench` in a pseudo-terminal, stop each by a signal, and check that nothing is
+# left running; they serve the build made here.
 set -euo pipefail
 
 # shellcheck source=scripts/lib/runner.sh
 source "$(dirname "$0")/lib/runner.sh"
 
 CHROMIUM=${CHROMIUM_PATH:-/usr/bin/chromium}
-UNIT_REPORT=.data/vitest.json
+ONLY_FILES=${KB_TEST_FILES:-}
+RUN_NAME=test
+if [[ -n $ONLY_FILES ]]; then RUN_NAME=test-files; fi
+UNIT_REPORT=.data/vitest-$RUN_NAME.json
 E2E_REPORT=.data/vitest-e2e.json
+STOP_REPORT=.data/vitest-interrupt.json
 UNIT_EXIT=""
 E2E_EXIT=""
+STOP_EXIT=""
 FAILURES=()
 SUMMARIZED=0
 STARTED=$SECONDS
@@ -28,6 +39,7 @@ summarize() { # extra summarizer arguments
   local runs=()
   if [[ -n $UNIT_EXIT ]]; then runs+=(--run "vitest=$UNIT_REPORT:$UNIT_EXIT"); fi
   if [[ -n $E2E_EXIT ]]; then runs+=(--run "browser=$E2E_REPORT:$E2E_EXIT"); fi
+  if [[ -n $STOP_EXIT ]]; then runs+=(--run "interrupt=$STOP_REPORT:$STOP_EXIT"); fi
   SUMMARIZED=1
   node scripts/lib/summarize-results.mjs "${runs[@]}" "${FAILURES[@]}" "$@"
 }
@@ -66,7 +78,7 @@ if [[ -n ${TEST_DATABASE_URL:-} ]]; then
   kb_say "using the database at TEST_DATABASE_URL"
 else
   unset DATABASE_URL
-  kb_pg_start pg-test "$PG_PORT" fresh
+  kb_pg_start "pg-$RUN_NAME" "$PG_PORT" fresh
 fi
 
 MIGRATED=1
@@ -77,7 +89,18 @@ if ! npx --no-install tsx scripts/migrate.ts; then
 fi
 
 # --- unit, component and integration tests ----------------------------------------------------
-rm -f "$UNIT_REPORT" "$E2E_REPORT"
+rm -f "$UNIT_REPORT"
+if [[ -n $ONLY_FILES ]]; then
+  kb_say "running only: $ONLY_FILES (KB_TEST_FILES)"
+  UNIT_EXIT=0
+  # shellcheck disable=SC2086 # a list of files, split on spaces
+  npx --no-install vitest run --config tests/vitest.config.ts --reporter=default --reporter=json \
+    --outputFile="$UNIT_REPORT" $ONLY_FILES || UNIT_EXIT=$?
+  cleanup
+  summarize
+  exit
+fi
+rm -f "$E2E_REPORT" "$STOP_REPORT"
 kb_say "running unit, component and integration tests"
 UNIT_EXIT=0
 npx --no-install vitest run --config tests/vitest.config.ts --reporter=default --reporter=json \
@@ -95,6 +118,18 @@ else
   E2E_EXIT=0
   npx --no-install vitest run --config tests/e2e/vitest.e2e.config.ts --reporter=default \
     --reporter=json --outputFile="$E2E_REPORT" || E2E_EXIT=$?
+fi
+
+kb_app_stop
+
+# --- interrupt tests: the runners stopped by signals, against the build above -----------------------
+if [[ ! -s .next/BUILD_ID ]]; then
+  FAILURES+=(--failure "interrupt tests not run: no build to serve")
+else
+  kb_say "running interrupt tests (npm run demo, npm test, npm run bench stopped by signals)"
+  STOP_EXIT=0
+  npx --no-install vitest run --config tests/interrupt/vitest.interrupt.config.ts --reporter=default \
+    --reporter=json --outputFile="$STOP_REPORT" || STOP_EXIT=$?
 fi
 
 # --- stop everything, then the closing line ---------------------------------------------------

@@ -1,6 +1,7 @@
 # shellcheck shell=bash
 # Build and serve the production app. Source after common.sh.
 #   kb_next_build              next build; a failed build leaves .next half-written, so it is removed
+#   kb_next_build_or_reuse SETTING   the same, unless SETTING is `reuse` and a build exists (serve that)
 #   kb_app_start PORT [LOG]    scripts/serve.mjs (Next behind node:http) on 127.0.0.1:PORT (output to LOG, else inherited), waits until it answers
 #   kb_app_stop                stops what kb_app_start started (idempotent)
 
@@ -14,6 +15,14 @@ kb_next_build() {
     kb_warn "next build failed; removed .next so the next build starts clean"
     return 1
   fi
+}
+
+kb_next_build_or_reuse() { # SETTING
+  if [[ $1 == reuse && -s $KB_ROOT/.next/BUILD_ID ]]; then
+    kb_say "serving the existing build (.next)"
+    return 0
+  fi
+  kb_next_build
 }
 
 kb_app_start() { # PORT [LOG]

@@ -8,6 +8,9 @@ const envSchema = z.object({
   // auto: the Neon driver for *.neon.tech hosts, node-postgres otherwise.
   DB_DRIVER: z.enum(["auto", "pg", "neon"]).default("auto"),
   DB_POOL_MAX: z.coerce.number().int().min(1).max(100).default(10),
+  // How long a request waits for a new database connection before it is answered 503 (an unreachable host
+  // would otherwise hold it until the operating system gives up).
+  DB_CONNECT_TIMEOUT_MS: z.coerce.number().int().min(100).max(60_000).default(5_000),
   BETTER_AUTH_SECRET: z.string().min(16).optional(),
   BETTER_AUTH_URL: z.string().url().default("http://127.0.0.1:3000"),
   // Comma-separated extra origins allowed to send state-changing requests (auth and app routes).

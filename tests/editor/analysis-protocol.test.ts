@@ -37,12 +37,13 @@ describe("the worker's answer", () => {
     expect(reply.ok).toBe(false);
     if (reply.ok) return;
     expect(reply.fault).toMatchObject({ kind: "invalid", path: "drive.neckDiameterMm", part: "neck" });
-    expect(reply.fault.message).toMatch(/drive.neckDiameterMm must be at least 0.3 mm/);
+    // In the panel's words, not the contract's dotted path.
+    expect(reply.fault.message).toBe("Neck diameter must be at least 0.3 mm");
   });
 
   it("calls a neck wider than the mouth impossible, on the neck", () => {
     const reply = answerAnalysisRequest({ type: "analyze", id: 1, quality: "full", layout: setAt(TARNWICK_10_BASE, "drive.neckDiameterMm", 9) });
-    expect(!reply.ok && reply.fault).toMatchObject({ kind: "impossible", part: "neck", path: "drive.neckDiameterMm" });
+    expect(!reply.ok && reply.fault).toMatchObject({ kind: "impossible", part: "neck", path: "drive.neckDiameterMm", message: "Neck diameter must be smaller than cup mouth diameter" });
   });
 
   it("calls arms that cannot close impossible, naming the part", () => {
@@ -96,6 +97,32 @@ describe("the client's protocol", () => {
   });
 });
 
+describe("answering on this thread", () => {
+  it("is the newest answer: a waiting request is dropped and an older worker reply never overwrites it", async () => {
+    const w = workerOverChannel();
+    const sfAt = (neckMm: number) => analyzeLayout(setAt(TARNWICK_10_BASE, "drive.neckDiameterMm", neckMm), ANALYSIS_GRIDS.coarse).strength.safetyFactor;
+    const delivered: { id: number; latest: boolean; sf: number }[] = [];
+    const client = createAnalysisClient(w.port, (reply, latest) => {
+      if (reply.ok) delivered.push({ id: reply.id, latest, sf: reply.analysis.strength.safetyFactor });
+    });
+    client.request(setAt(TARNWICK_10_BASE, "drive.neckDiameterMm", 4.8), "full"); // id 1, in flight
+    client.request(setAt(TARNWICK_10_BASE, "drive.neckDiameterMm", 4.6), "full"); // id 2, waiting
+    const here = client.answerHere(setAt(TARNWICK_10_BASE, "drive.neckDiameterMm", 4.2), "coarse"); // id 3
+    expect(here.ok && here.id).toBe(3);
+    expect(client.droppedCount()).toBe(1);
+    expect(delivered).toEqual([{ id: 3, latest: true, sf: sfAt(4.2) }]);
+    // The worker's reply to request 1 arrives after: it is older than what is shown, so it is not delivered.
+    await new Promise((r) => setTimeout(r, 50));
+    expect(w.seen).toEqual([1]);
+    expect(delivered.map((d) => d.id)).toEqual([3]);
+    // A newer worker request is delivered again.
+    client.request(setAt(TARNWICK_10_BASE, "drive.neckDiameterMm", 4.0), "full");
+    await waitFor(() => expect(delivered.map((d) => d.id)).toEqual([3, 4]));
+    expect(delivered[1]).toEqual({ id: 4, latest: true, sf: sfAt(4.0) });
+    w.close();
+  });
+});
+
 describe("the live analysis hook", () => {
   it("fills the store's trade-off from the full analysis and keeps it through coarse drafts", async () => {
     // jsdom has no Worker: the port answers on this thread, through the same protocol.
@@ -108,8 +135,10 @@ describe("the live analysis hook", () => {
 
     const seq = store.getState().live.seq;
     act(() => store.getState().setDraft(setAt(TARNWICK_10_BASE, "drive.neckDiameterMm", 4.5)));
-    await waitFor(() => expect(store.getState().live.seq).toBeGreaterThan(seq));
+    // A draft's coarse figures are there as soon as the draft is (answered on this thread, in step with the pointer).
+    expect(store.getState().live.seq).toBe(seq + 1);
     expect(store.getState().live.quality).toBe("coarse");
+    expect(store.getState().live.analysis?.strength.safetyFactor).toBe(analyzeLayout(setAt(TARNWICK_10_BASE, "drive.neckDiameterMm", 4.5), ANALYSIS_GRIDS.coarse).strength.safetyFactor);
     expect(store.getState().live.tradeoff).toBe(first);
 
     act(() => store.getState().commit(setAt(TARNWICK_10_BASE, "drive.neckDiameterMm", 4.5)));

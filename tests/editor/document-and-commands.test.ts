@@ -3,7 +3,8 @@ import { TARNWICK_10_BASE } from "@/contracts/demo-layouts";
 import { layoutFieldsSchema } from "@/contracts/layout";
 import { moveHandle, nudgeHandle, setNeckDiameter } from "@/editor/commands/edit-commands";
 import { handleById, handlePlanePoint, HANDLES } from "@/editor/document/handles";
-import { ALL_FIELDS, fieldRange } from "@/editor/document/layout-fields";
+import { ALL_FIELDS, fieldRange, layoutMessageInWords } from "@/editor/document/layout-fields";
+import { layoutSchema } from "@/contracts/layout";
 import { getAt, setAt } from "@/editor/document/layout-paths";
 
 describe("layout paths", () => {
@@ -74,5 +75,28 @@ describe("field table", () => {
     expect(fieldRange("drive.neckDiameterMm")).toEqual({ min: 0.3, max: 100 });
     expect(fieldRange("strength.motor.kvRpmPerV")).toEqual({ min: 50, max: 50000 });
     expect(fieldRange("strength.gearRatios")).toEqual({ min: 0.1, max: 100 });
+  });
+});
+
+describe("contract messages in the panel's words", () => {
+  it("names every field by its label, never by its dotted path", () => {
+    expect(layoutMessageInWords("drive.neckDiameterMm must be smaller than drive.cupMouthDiameterMm")).toBe("Neck diameter must be smaller than cup mouth diameter");
+    expect(layoutMessageInWords("topView.rackEnd must be at least 1 mm from topView.steeringArmBall (the tie rod has a length)")).not.toMatch(/topView\./);
+    expect(layoutMessageInWords("a path we do not know: drive.nothingHere stays")).toBe("a path we do not know: drive.nothingHere stays");
+  });
+
+  it("leaves no dotted path in any cross-field message the contract writes", () => {
+    const broken = [
+      setAt(TARNWICK_10_BASE, "frontView.lowerOuter.y", TARNWICK_10_BASE.frontView.lowerInner.y - 1),
+      setAt(TARNWICK_10_BASE, "frontView.upperOuter.z", TARNWICK_10_BASE.frontView.lowerOuter.z - 1),
+      setAt(TARNWICK_10_BASE, "drive.neckDiameterMm", 9),
+      setAt(TARNWICK_10_BASE, "drive.outboardJoint.y", TARNWICK_10_BASE.drive.inboardJoint.y - 1),
+      setAt(TARNWICK_10_BASE, "topView.rackEnd", TARNWICK_10_BASE.topView.steeringArmBall),
+    ];
+    for (const layout of broken) {
+      const result = layoutSchema.safeParse(layout);
+      expect(result.success).toBe(false);
+      for (const issue of result.error!.issues) expect(layoutMessageInWords(issue.message), issue.message).not.toMatch(/\b(frontView|sideView|topView|drive|strength)\.[A-Za-z]/);
+    }
   });
 });

@@ -1,4 +1,4 @@
-import { act, fireEvent, render, screen, within } from "@testing-library/react";
+import { act, fireEvent, render, renderHook, screen, within } from "@testing-library/react";
 import { describe, expect, it } from "vitest";
 import { TARNWICK_10_BASE } from "@/contracts/demo-layouts";
 import { analyzeLayout, neckTradeoff, type AnalysisResult, type EnvelopeResult } from "@/engine";
@@ -8,9 +8,12 @@ import { ackermannPlotRows } from "@/editor/plots/ackermann-plot";
 import { neckPickTestId } from "@/editor/plots/neck-tradeoff-plot";
 import { chartValue, figureText } from "@/editor/plots/plot-data";
 import { travelPlotRows } from "@/editor/plots/travel-plot";
-import { EditorProvider, useEditorStore } from "@/editor/store/editor-context";
-import { undo, type EditorStore } from "@/editor/store/editor-store";
+import { EditorProvider, useEditorHeldWhileDragging, useEditorStore } from "@/editor/store/editor-context";
+import { undo, type EditorState, type EditorStore } from "@/editor/store/editor-store";
+import { setNeckDiameter } from "@/editor/commands/edit-commands";
 import { KIT } from "./editor-fixtures";
+
+const selectLiveAnalysis = (s: EditorState) => s.live.analysis;
 
 // One analysis of the demo baseline on a small grid, shared by the tests (the engine is checked elsewhere).
 const GRID = { travelSteps: 9, steerSteps: 17 };
@@ -170,5 +173,24 @@ describe("the editor's plots", () => {
     expect(screen.getByTestId("plot-empty").textContent).toMatch(/not been analysed/);
     fireEvent.click(screen.getByTestId("tab-plot-tab-neck"));
     expect(screen.getByTestId("plot-empty").textContent).toMatch(/Working out the trade-off/);
+  });
+});
+
+describe("the plots during a drag", () => {
+  it("hold the figures they had when the drag began, and follow again on release", () => {
+    const before = analyzeLayout(TARNWICK_10_BASE, { travelSteps: 5, steerSteps: 5 });
+    const thinner = setNeckDiameter(TARNWICK_10_BASE, 4);
+    const during = analyzeLayout(thinner, { travelSteps: 5, steerSteps: 5 });
+    const init = { kit: KIT, layout: TARNWICK_10_BASE, readOnly: false, lengthUnit: "mm" as const, analysis: before };
+    const { result } = renderHook(() => ({ held: useEditorHeldWhileDragging(selectLiveAnalysis), store: useEditorStore() }), {
+      wrapper: ({ children }) => <EditorProvider init={init}>{children}</EditorProvider>,
+    });
+    expect(result.current.held).toBe(before);
+    act(() => result.current.store.getState().setDraft(thinner));
+    act(() => result.current.store.getState().setLive({ analysis: during, quality: "coarse" }));
+    expect(result.current.store.getState().live.analysis).toBe(during);
+    expect(result.current.held).toBe(before);
+    act(() => result.current.store.getState().commit(thinner));
+    expect(result.current.held).toBe(during);
   });
 });

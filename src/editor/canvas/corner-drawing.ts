@@ -169,7 +169,8 @@ export function topBox(layout: Layout): PlaneBox {
   const r = f.tyreRadiusMm + 4;
   return boxOf([
     [outer, r],
-    [-outer, -r],
+    // Ahead of the tyres, room for the figures set there (the arm and trail of the left wheel).
+    [-outer, -r * 1.5],
     [t.steeringArmBall.y, -t.steeringArmBall.x],
     [t.rackEnd.y, -t.rackEnd.x],
   ])!;

@@ -50,6 +50,8 @@ export interface JointSection {
   /** The slot's end line for a slotted cup (from the pivot at the slot limit), else null. */
   readonly slotLine: readonly [PlanePoint, PlanePoint] | null;
   readonly pivotRadiusMm: number;
+  /** Thickness the cup wall is drawn with, mm. */
+  readonly wallMm: number;
   readonly extent: { readonly minU: number; readonly maxU: number; readonly minV: number; readonly maxV: number };
 }
 
@@ -102,6 +104,7 @@ export function jointSection(input: JointSectionInput): JointSection {
     state,
     slotLine,
     pivotRadiusMm: Math.max(h * 1.15, 0.4),
+    wallMm: wall,
     extent: { minU: -length - 1, maxU: depth + wall + 1, minV: -R - wall - 1, maxV: Math.max(R + wall, end[1] + h) + 1 },
   };
 }

@@ -29,7 +29,7 @@ export function JointSectionView() {
   const box = useMemo(() => ({ ...section.extent, maxV: Math.max(section.extent.maxV, d.cupMouthDiameterMm * 1.4) }), [section.extent, d.cupMouthDiameterMm]);
   const colour = CLEARANCE_COLOUR[valid ? section.state : "touching"];
   const limit = analysis?.drive.jointLimitDeg ?? null;
-  const state = valid ? CLEARANCE_LABEL[section.state] : "neck wider than the mouth";
+  const state = valid ? CLEARANCE_LABEL[section.state] : "wider than the mouth";
   const summary = section.clearanceMm !== null
     ? `${wheel} wheel, joint at ${fmt(beta, 1, "°")}: neck ${state}, gap ${formatLength(section.clearanceMm, unit, 2)}`
     : `${wheel} wheel, joint at ${fmt(beta, 1, "°")}: slot ${state}, ${fmt((d.slotLimitDeg ?? 0) - beta, 1, "°")} to the slot end`;
@@ -62,15 +62,17 @@ export function JointSectionView() {
             <>
               <PlaneLine t={t} points={[section.rim, section.neckSurfaceNearRim]} stroke={colour} width={2} />
               <PlaneDot t={t} at={section.rim} radiusPx={3.5} fill={colour} />
-              <PlaneLabel t={t} at={section.rim} text={`gap ${formatLength(section.clearanceMm, unit, 2)}`} colour={colour} dx={6} dy={-18} bold />
+              <PlaneLabel t={t} at={section.rim} text={`gap ${formatLength(section.clearanceMm, unit, 2)}`} colour={colour} dx={6} dy={-(section.wallMm * t.scale) - 16} bold />
             </>
           ) : null}
           {show ? (
             <>
-              <PlaneDimension t={t} from={[-d.pivotDepthMm, -d.cupMouthDiameterMm / 2]} to={[-d.pivotDepthMm, d.cupMouthDiameterMm / 2]} text={`mouth ⌀${formatLength(d.cupMouthDiameterMm, unit, 2)}`} offsetPx={-d.cupMouthDiameterMm * t.scale * 0.25 - 30} />
-              <PlaneDimension t={t} from={[-d.pivotDepthMm, -d.cupMouthDiameterMm / 2]} to={[0, -d.cupMouthDiameterMm / 2]} text={`pivot depth ${formatLength(d.pivotDepthMm, unit, 2)}`} offsetPx={-d.cupMouthDiameterMm * t.scale * 0.3 - 10} />
+              {/* Clear of the part: the mouth just outside its plane with its figure under the cup's corner,
+                  the pivot depth under the lower wall, β inside the cup beside the pivot. */}
+              <PlaneDimension t={t} from={[-d.pivotDepthMm, -d.cupMouthDiameterMm / 2]} to={[-d.pivotDepthMm, d.cupMouthDiameterMm / 2]} text={`mouth ⌀${formatLength(d.cupMouthDiameterMm, unit, 2)}`} offsetPx={-10} label="outside-from" />
+              <PlaneDimension t={t} from={[0, -d.cupMouthDiameterMm / 2]} to={[-d.pivotDepthMm, -d.cupMouthDiameterMm / 2]} text={`pivot depth ${formatLength(d.pivotDepthMm, unit, 2)}`} offsetPx={-(section.wallMm * t.scale + 8)} label="under" />
               <PlaneLabel t={t} at={section.neckAxis[1]} text={`neck ⌀${formatLength(d.neckDiameterMm, unit, 2)}`} dx={-20} dy={-24} />
-              <PlaneLabel t={t} at={[0, 0]} text={`β ${fmt(beta, 1, "°")}`} dx={8} dy={6} bold />
+              <PlaneLabel t={t} at={[0, 0]} text={`β ${fmt(beta, 1, "°")}`} dx={Math.max(3, section.pivotRadiusMm * t.scale) + 4} dy={-5} bold />
             </>
           ) : null}
         </>

@@ -23,13 +23,19 @@ export function PlaneDot({ t, at, radiusPx = 3.5, fill = INK.knuckle, stroke, wi
   return <Circle listening={false} x={x} y={y} radius={radiusPx} fill={fill} stroke={stroke} strokeWidth={width} perfectDrawEnabled={false} />;
 }
 
-export function PlaneLabel({ t, at, text, colour = INK.label, dx = 6, dy = -14, size = 11, bold = false }: { t: ViewTransform; at: PlanePoint; text: string; colour?: string; dx?: number; dy?: number; size?: number; bold?: boolean }) {
+/** A figure at a point, offset by (dx, dy) px; `align="center"` centres it on the offset point. */
+export function PlaneLabel({ t, at, text, colour = INK.label, dx = 6, dy = -14, size = 11, bold = false, align = "left" }: { t: ViewTransform; at: PlanePoint; text: string; colour?: string; dx?: number; dy?: number; size?: number; bold?: boolean; align?: "left" | "center" }) {
   const [x, y] = planeToScreen(t, at);
-  return <Text listening={false} x={x + dx} y={y + dy} text={text} fontSize={size} fontFamily={CANVAS_FONT} fontStyle={bold ? "bold" : "normal"} fill={colour} perfectDrawEnabled={false} />;
+  const box = align === "center" ? { x: x + dx - LABEL_BOX_PX / 2, width: LABEL_BOX_PX, align: "center" as const } : { x: x + dx };
+  return <Text listening={false} {...box} y={y + dy} text={text} fontSize={size} fontFamily={CANVAS_FONT} fontStyle={bold ? "bold" : "normal"} fill={colour} perfectDrawEnabled={false} />;
 }
 
-/** A dimension: a thin line between two points with its figure at the middle, offset to one side. */
-export function PlaneDimension({ t, from, to, text, offsetPx = 0, colour = INK.label }: { t: ViewTransform; from: PlanePoint; to: PlanePoint; text: string; offsetPx?: number; colour?: string }) {
+/**
+ * A dimension: a thin line between two points, offset to one side, with its figure at the middle — or,
+ * where that is crowded (inside a small part), centred under the line (`label="under"`) or set past the
+ * `from` end (`label="outside-from"`), so it reads clear of the part.
+ */
+export function PlaneDimension({ t, from, to, text, offsetPx = 0, colour = INK.label, label = "middle" }: { t: ViewTransform; from: PlanePoint; to: PlanePoint; text: string; offsetPx?: number; colour?: string; label?: "middle" | "under" | "outside-from" }) {
   const a = planeToScreen(t, from);
   const b = planeToScreen(t, to);
   const dx = b[0] - a[0];
@@ -42,14 +48,30 @@ export function PlaneDimension({ t, from, to, text, offsetPx = 0, colour = INK.l
   const tick = 4;
   const tx = (-dy / len) * tick;
   const ty = (dx / len) * tick;
+  const mid = [(p1[0]! + p2[0]!) / 2, (p1[1]! + p2[1]!) / 2] as const;
+  const textProps =
+    label === "middle" ? { x: mid[0] + 3, y: mid[1] - 13 }
+    : label === "under" ? { x: mid[0] - LABEL_BOX_PX / 2, y: Math.max(p1[1]!, p2[1]!) + 4, width: LABEL_BOX_PX, align: "center" as const }
+    : outsideLabel(p1[0]!, p1[1]!, -dx / len, -dy / len);
   return (
     <>
       <Line listening={false} points={[p1[0]!, p1[1]!, p2[0]!, p2[1]!]} stroke={colour} strokeWidth={0.75} perfectDrawEnabled={false} />
       <Line listening={false} points={[p1[0]! - tx, p1[1]! - ty, p1[0]! + tx, p1[1]! + ty]} stroke={colour} strokeWidth={0.75} />
       <Line listening={false} points={[p2[0]! - tx, p2[1]! - ty, p2[0]! + tx, p2[1]! + ty]} stroke={colour} strokeWidth={0.75} />
-      <Text listening={false} x={(p1[0]! + p2[0]!) / 2 + 3} y={(p1[1]! + p2[1]!) / 2 - 13} text={text} fontSize={11} fontFamily={CANVAS_FONT} fill={colour} />
+      <Text listening={false} {...textProps} text={text} fontSize={11} fontFamily={CANVAS_FONT} fill={colour} />
     </>
   );
+}
+
+/** Width of the box a label set beside a line end is aligned in, px. */
+const LABEL_BOX_PX = 160;
+
+/** A label past a line's end (x, y), the line leaving it along −(ax, ay): run on along a level line, or set to the left of an upright one's end. */
+function outsideLabel(x: number, y: number, ax: number, ay: number) {
+  if (Math.abs(ax) >= Math.abs(ay)) {
+    return ax < 0 ? { x: x - 4 - LABEL_BOX_PX, y: y - 6, width: LABEL_BOX_PX, align: "right" as const } : { x: x + 4, y: y - 6 };
+  }
+  return { x: x - 4 - LABEL_BOX_PX, y: ay > 0 ? y + 2 : y - 14, width: LABEL_BOX_PX, align: "right" as const };
 }
 
 /** The millimetre grid of a view (one shape, drawn straight to the canvas), spaced from the snap step. */

@@ -75,7 +75,7 @@ export function TopView() {
           <>
             <PlaneLine t={t} points={[[0, -layout.frontView.tyreRadiusMm * 2], [0, layout.topView.wheelbaseMm + 10]]} stroke={INK.ghost} width={1} dash={[6, 4]} />
             <PlaneLine t={t} points={[[u0, 0], [u1, 0]]} stroke={INK.ghost} width={1} dash={[2, 4]} />
-            <PlaneLabel t={t} at={[u0, 0]} text="front axle line" dx={4} dy={2} colour={INK.ground} size={10} />
+            <PlaneLabel t={t} at={[0, 0]} text="front axle line" dx={4} dy={4} colour={INK.ground} size={10} />
             {show.ackermann ? (
               <>
                 <PlaneLine t={t} points={[[u0, layout.topView.wheelbaseMm], [u1, layout.topView.wheelbaseMm]]} stroke={INK.construction} width={1.5} />
@@ -97,8 +97,11 @@ export function TopView() {
                 <Wheel t={t} w={d.right} neckMm={layout.drive.neckDiameterMm} part={null} shaftColour={INK.shaft} />
                 {show.dimensions ? (
                   <>
-                    <PlaneDimension t={t} from={d.left.kingpinGround} to={[d.left.contactPatch[0], d.left.kingpinGround[1]]} text={`trail ${formatLength(d.trailMm, unit, 1, true)}`} offsetPx={16} />
-                    <PlaneDimension t={t} from={d.left.steeringArm[0]} to={d.left.steeringArm[1]} text={`arm ${formatLength(d.steeringArmLengthMm, unit, 1)}`} offsetPx={-14} />
+                    {/* The figures go ahead of the tyre, where the drawing is empty: beside the small parts they
+                        would cover the linkage or run off the view. */}
+                    <PlaneDimension t={t} from={d.left.kingpinGround} to={[d.left.contactPatch[0], d.left.kingpinGround[1]]} text="" offsetPx={16} />
+                    <PlaneDimension t={t} from={d.left.steeringArm[0]} to={d.left.steeringArm[1]} text="" offsetPx={-14} />
+                    <PlaneLabel t={t} at={[d.left.wheelCentre[0], -layout.frontView.tyreRadiusMm]} text={`arm ${formatLength(d.steeringArmLengthMm, unit, 1)}\ntrail ${formatLength(d.trailMm, unit, 1, true)}`} dx={0} dy={6} align="center" />
                     <PlaneLabel t={t} at={d.left.wheelCentre} text={`${fmt(d.left.roadWheelDeg, 1, "°")}`} dx={8} dy={-20} bold />
                     <PlaneLabel t={t} at={d.right.wheelCentre} text={`${fmt(d.right.roadWheelDeg, 1, "°")}`} dx={-36} dy={-20} bold />
                   </>

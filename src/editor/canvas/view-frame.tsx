@@ -101,14 +101,18 @@ export function ViewFrame({ id, title, axes, box, handles = [], children, notes 
     return best;
   };
 
+  // The view's box, read once per press: it does not move under a drag, and reading it on every move
+  // would force a layout of the page's last changes in the middle of the move.
+  const pressBox = useRef<DOMRect | null>(null);
   const input = (e: React.PointerEvent, cur: ViewTransform): PointerInput => {
-    const r = containerRef.current!.getBoundingClientRect();
+    const r = pressBox.current ?? containerRef.current!.getBoundingClientRect();
     const screen: ScreenPoint = [e.clientX - r.left, e.clientY - r.top];
     return { screen, plane: screenToPlane(cur, screen), free: e.altKey || e.ctrlKey || e.metaKey };
   };
 
   const onPointerDown = (e: React.PointerEvent) => {
     if (!t || e.button !== 0) return;
+    pressBox.current = containerRef.current!.getBoundingClientRect();
     const p = input(e, t);
     const h = hit(p.screen);
     containerRef.current!.setPointerCapture(e.pointerId);
@@ -135,6 +139,7 @@ export function ViewFrame({ id, title, axes, box, handles = [], children, notes 
   };
   const end = (cancelled: boolean) => {
     pan.current = null;
+    pressBox.current = null;
     if (cancelled) tool.cancel();
     else tool.pointerUp();
     setCursor("default");

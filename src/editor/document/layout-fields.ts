@@ -125,6 +125,26 @@ export function fieldByPath(path: string): FieldDef | undefined {
   return BY_PATH.get(path);
 }
 
+// A dotted layout path as the contract writes it in a message ("drive.neckDiameterMm").
+const LAYOUT_PATH = /\b(?:frontView|sideView|topView|drive|strength)(?:\.[A-Za-z0-9]+)+/g;
+
+/**
+ * A contract message in the panel's words: every field path it names becomes that field's label
+ * ("drive.neckDiameterMm must be smaller than drive.cupMouthDiameterMm" → "Neck diameter must be smaller
+ * than cup mouth diameter"). A path with no field of its own (a whole point) takes its first field's
+ * label without the axis.
+ */
+export function layoutMessageInWords(message: string): string {
+  let first = true;
+  return message.replace(LAYOUT_PATH, (path, offset: number) => {
+    const label = BY_PATH.get(path)?.label ?? BY_PATH.get(`${path}.y`)?.label.replace(/ y$/, "") ?? BY_PATH.get(`${path}.x`)?.label.replace(/ x$/, "");
+    if (!label) return path;
+    const lead = first && offset === 0;
+    first = false;
+    return lead ? label : label.charAt(0).toLowerCase() + label.slice(1);
+  });
+}
+
 /** True for fields whose numbers are lengths in mm (converted for display). */
 export function isLengthField(path: string): boolean {
   return BY_PATH.get(path)?.kind === "length";

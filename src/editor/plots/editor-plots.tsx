@@ -3,23 +3,29 @@
 // trade-off writes it to the layout as one undo step (the panel and the drawings follow the store).
 import { memo, useCallback, useDeferredValue } from "react";
 import { setNeckDiameter } from "../commands/edit-commands";
-import { useEditor, useEditorStore } from "../store/editor-context";
+import { useEditor, useEditorHeldWhileDragging, useEditorStore } from "../store/editor-context";
+import type { EditorState } from "../store/editor-store";
 import { TabSet } from "../workbench/tab-set";
 import { AckermannPlot } from "./ackermann-plot";
 import { JointEnvelopeMap } from "./joint-envelope-map";
 import { NeckTradeoffPlot } from "./neck-tradeoff-plot";
 import { TravelPlot } from "./travel-plot";
 
-// The plots take the live figures at low priority (useDeferredValue): while a handle is dragged, the
-// readouts and the drawings paint first and a plot catches up when the pointer leaves it a frame. Memoised,
-// so the urgent render that still carries the previous figures costs nothing.
+// While a handle is dragged the plots hold the figures they had (the readouts and the drawings follow the
+// pointer; redrawing every chart per move costs more than a frame), and take the layout's figures on
+// release, at low priority (useDeferredValue). Memoised, so a render with unchanged figures costs nothing.
 const Travel = memo(TravelPlot);
 const Envelope = memo(JointEnvelopeMap);
 const Ackermann = memo(AckermannPlot);
 
+const selectAnalysis = (s: EditorState) => s.live.analysis;
+const selectStale = (s: EditorState) => s.live.stale;
+
 function useDeferredLive() {
-  const analysis = useDeferredValue(useEditor((s) => s.live.analysis));
-  const stale = useDeferredValue(useEditor((s) => s.live.stale));
+  const analysis = useDeferredValue(useEditorHeldWhileDragging(selectAnalysis));
+  const held = useEditorHeldWhileDragging(selectStale);
+  // Marked stale while held: the figures are of the layout before the drag.
+  const stale = useDeferredValue(useEditor((s) => s.draft !== null) || held);
   return { analysis, stale };
 }
 

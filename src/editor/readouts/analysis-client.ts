@@ -1,6 +1,7 @@
 // The editor's side of the worker protocol: one request in flight at a time, and while it runs only the
 // newest waiting request is kept (the pointer can outrun the worker; only the latest layout matters).
-// Replies come back in the order sent, so the last one delivered is always of the newest layout sent.
+// Replies come back in the order sent; a reply older than one already delivered (answered on this thread,
+// see answerHere) is dropped, so what is delivered only ever gets newer.
 import { answerAnalysisRequest, type AnalysisQuality, type AnalysisReply, type AnalysisRequest } from "./analysis-protocol";
 
 /** A Worker, a MessagePort, or anything else that carries the messages both ways. */
@@ -12,6 +13,11 @@ export interface AnalysisPort {
 export interface AnalysisClient {
   /** Asks for an analysis of `layout`; returns the request id. */
   request(layout: unknown, quality: AnalysisQuality): number;
+  /**
+   * Answers at once on this thread, as the newest request (a waiting one is dropped). Only for work known
+   * to take a small part of a frame: a worker's reply lands a frame after the input that asked for it.
+   */
+  answerHere(layout: unknown, quality: AnalysisQuality): AnalysisReply;
   /** Id of the newest request made. */
   latestId(): number;
   /** How many requests were dropped for a newer one (the bench reports it). */
@@ -25,7 +31,14 @@ export function createAnalysisClient(port: AnalysisPort, onReply: (reply: Analys
   let inFlight: number | null = null;
   let waiting: AnalysisRequest | null = null;
   let dropped = 0;
+  let delivered = 0;
   let closed = false;
+
+  const deliver = (reply: AnalysisReply) => {
+    if (reply.id <= delivered) return;
+    delivered = reply.id;
+    onReply(reply, reply.id === latest);
+  };
 
   const send = (req: AnalysisRequest) => {
     inFlight = req.id;
@@ -36,7 +49,7 @@ export function createAnalysisClient(port: AnalysisPort, onReply: (reply: Analys
     if (closed) return;
     const reply = event.data;
     if (reply.id === inFlight) inFlight = null;
-    onReply(reply, reply.id === latest);
+    deliver(reply);
     if (inFlight === null && waiting) {
       const next = waiting;
       waiting = null;
@@ -54,6 +67,15 @@ export function createAnalysisClient(port: AnalysisPort, onReply: (reply: Analys
         waiting = req;
       }
       return req.id;
+    },
+    answerHere(layout, quality) {
+      const req: AnalysisRequest = { type: "analyze", id: nextId++, quality, layout };
+      latest = req.id;
+      if (waiting) dropped++;
+      waiting = null;
+      const reply = answerAnalysisRequest(req);
+      if (!closed) deliver(reply);
+      return reply;
     },
     latestId: () => latest,
     droppedCount: () => dropped,

@@ -2,6 +2,7 @@
 // (a range or a check between fields) or from the engine's GeometryError part name.
 import type { LayoutIssue } from "@/contracts/layout";
 import type { PartId } from "../document/handles";
+import { layoutMessageInWords } from "../document/layout-fields";
 import { HANDLES } from "../document/handles";
 import type { LayoutFault } from "../store/editor-store";
 
@@ -59,7 +60,7 @@ export function partForPath(path: string): PartId | null {
 /** A fault from the layout contract's first issue (a range: "invalid"; a check between fields: "impossible"). */
 export function faultFromIssues(issues: readonly LayoutIssue[], kind: LayoutFault["kind"]): LayoutFault {
   const first = issues[0] ?? { path: "", message: "The layout is not valid." };
-  return { kind, message: first.message, part: partForPath(first.path), handleId: handleForPath(first.path), path: first.path || null };
+  return { kind, message: layoutMessageInWords(first.message), part: partForPath(first.path), handleId: handleForPath(first.path), path: first.path || null };
 }
 
 /** A fault from the engine's GeometryError (part + reason). */

@@ -3,14 +3,28 @@ import { betterAuth } from "better-auth";
 import { drizzleAdapter } from "better-auth/adapters/drizzle";
 import { organization } from "better-auth/plugins/organization";
 import { db } from "../db/client";
+import { isDataStoreUnavailable } from "../db/unavailable";
 import * as schema from "../db/schema";
 import { authSecret, env, trustedOrigins } from "../env";
 import { createPersonalWorkspace } from "../data/workspaces";
 import { CLIENT_ADDRESS_HEADER } from "../http/client-address";
 import { ac, roles } from "./access";
 
+/**
+ * better-auth's own log lines, minus a database outage: better-auth logs that error with its whole stack and
+ * then throws it on, and the route wrapper logs it once more as one warning line and answers 503.
+ */
+function authLog(level: "debug" | "info" | "warn" | "error", message: string, ...args: unknown[]): void {
+  if (args.some(isDataStoreUnavailable)) return;
+  const line = `${new Date().toISOString()} ${level.toUpperCase()} [Better Auth]: ${message}`;
+  if (level === "error") console.error(line, ...args);
+  else if (level === "warn") console.warn(line, ...args);
+  else console.log(line, ...args);
+}
+
 export const auth = betterAuth({
   appName: "Knucklebench",
+  logger: { level: "warn", log: authLog },
   baseURL: env.BETTER_AUTH_URL,
   secret: authSecret(),
   trustedOrigins: trustedOrigins(),

@@ -1,4 +1,5 @@
 import type { z } from "zod";
+import { DATA_STORE_RETRY_AFTER_S, DATA_STORE_UNAVAILABLE_CODE, DATA_STORE_UNAVAILABLE_MESSAGE } from "@/contracts/data-store";
 
 export type FieldIssue = { path: string; message: string };
 
@@ -20,6 +21,12 @@ export const unauthorized = () => new HttpError(401, "unauthenticated", "Sign in
 export const forbidden = (message = "Your role in this workspace does not allow that.") =>
   new HttpError(403, "forbidden", message);
 export const notFound = (what: string) => new HttpError(404, "not_found", `${what} was not found.`);
+
+/** The database cannot be reached (stopped, restarting, unreachable): a retry may succeed, nothing was written. */
+export const dataStoreUnavailable = () =>
+  new HttpError(503, DATA_STORE_UNAVAILABLE_CODE, DATA_STORE_UNAVAILABLE_MESSAGE, undefined, undefined, {
+    "retry-after": String(DATA_STORE_RETRY_AFTER_S),
+  });
 
 /** Dotted path with [n] for array indices, the form the README documents. */
 export function issuePath(path: readonly PropertyKey[]): string {

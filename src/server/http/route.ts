@@ -4,7 +4,8 @@ import type { Action, Resource } from "@/contracts/roles";
 import { requireSession, requireWorkspaceAccess, type Signed, type WorkspaceAccess } from "../data/guard";
 import { trustedOrigins } from "../env";
 import { isJsonMediaType, unsupportedMediaType } from "./body";
-import { errorResponse, HttpError } from "./errors";
+import { isDataStoreUnavailable } from "../db/unavailable";
+import { dataStoreUnavailable, errorResponse, HttpError } from "./errors";
 import { describeError } from "./error-log";
 
 type RouteContext<P> = { params: Promise<P> };
@@ -18,8 +19,13 @@ export function toErrorResponse(error: unknown, req?: Request): Response {
   }
   // The line names the route and the error, never the query string, body or query parameters (names, notes,
   // e-mail addresses); the id in the answer finds the line.
-  const errorId = randomUUID();
   const route = req ? `${req.method} ${new URL(req.url).pathname.slice(0, 200)}` : "(route)";
+  // An outage is not a bug: one line, and a 503 the client may retry.
+  if (isDataStoreUnavailable(error)) {
+    console.warn(`Data store unavailable in ${route}: ${describeError(error).split("\n", 1)[0]}`);
+    return errorResponse(dataStoreUnavailable());
+  }
+  const errorId = randomUUID();
   console.error(`Unhandled error ${errorId} in ${route}: ${describeError(error)}`);
   return errorResponse(new HttpError(500, "internal", "Something went wrong on our side; nothing was changed.", undefined, { errorId }));
 }

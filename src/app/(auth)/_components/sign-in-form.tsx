@@ -8,7 +8,7 @@ import { Button } from "@/components/ui/button";
 import { TextField } from "@/components/ui/field";
 import { ErrorNotice } from "@/components/ui/notice";
 import { safeNextPath, signInFields, type SignInFields } from "@/contracts/account";
-import { authClient } from "@/lib/auth-client";
+import { authClient, authFailureMessage } from "@/lib/auth-client";
 
 export function SignInForm({ next }: { next?: string }) {
   const router = useRouter();
@@ -19,7 +19,7 @@ export function SignInForm({ next }: { next?: string }) {
     setFailure(null);
     const { error } = await authClient.signIn.email(values);
     if (error) {
-      setFailure(error.status === 429 ? "Too many attempts. Wait a minute and try again." : error.message || "Those details did not match an account.");
+      setFailure(authFailureMessage(error, "Those details did not match an account."));
       return;
     }
     router.replace(safeNextPath(next));

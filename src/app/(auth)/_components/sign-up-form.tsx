@@ -8,7 +8,7 @@ import { Button } from "@/components/ui/button";
 import { TextField } from "@/components/ui/field";
 import { ErrorNotice } from "@/components/ui/notice";
 import { safeNextPath, signUpFields, type SignUpFields } from "@/contracts/account";
-import { authClient } from "@/lib/auth-client";
+import { authClient, authFailureMessage } from "@/lib/auth-client";
 
 export function SignUpForm({ next }: { next?: string }) {
   const router = useRouter();
@@ -19,7 +19,7 @@ export function SignUpForm({ next }: { next?: string }) {
     setFailure(null);
     const { error } = await authClient.signUp.email(values);
     if (error) {
-      setFailure(error.status === 429 ? "Too many attempts. Wait a minute and try again." : error.message || "Could not create the account.");
+      setFailure(authFailureMessage(error, "Could not create the account."));
       return;
     }
     router.replace(safeNextPath(next));

@@ -3,6 +3,7 @@ import { auth } from "@/server/auth/auth";
 import { forgetCachedSession } from "@/server/data/guard";
 import { withClientAddress } from "@/server/http/client-address";
 import { errorResponse, notFound } from "@/server/http/errors";
+import { toErrorResponse } from "@/server/http/route";
 
 const handler = toNextJsHandler(auth);
 
@@ -19,15 +20,24 @@ function isOrganizationEndpoint(req: Request): boolean {
 
 const hidden = () => errorResponse(notFound("That endpoint"));
 
+/** better-auth lets a database error through (its rate limiter reads PostgreSQL first): answered as every route answers it. */
+async function answered(req: Request, run: () => Promise<Response>): Promise<Response> {
+  try {
+    return await run();
+  } catch (error) {
+    return toErrorResponse(error, req);
+  }
+}
+
 // The rate limit counts each request against the address withClientAddress resolves, never a raw header.
 export async function GET(req: Request): Promise<Response> {
   if (isOrganizationEndpoint(req)) return hidden();
-  return handler.GET(withClientAddress(req));
+  return answered(req, () => handler.GET(withClientAddress(req)));
 }
 
 export async function POST(req: Request): Promise<Response> {
   if (isOrganizationEndpoint(req)) return hidden();
   // A signed-out session must stop working on this instance at once, not when its memo lapses.
   if (new URL(req.url).pathname.endsWith("/sign-out")) forgetCachedSession(req.headers);
-  return handler.POST(withClientAddress(req));
+  return answered(req, () => handler.POST(withClientAddress(req)));
 }

@@ -1,0 +1,27 @@
+// `npm run bench` stopped by Ctrl-C while it loads its server: the benchmark, the app and the bench
+// PostgreSQL end before the prompt returns. It serves the build `npm test` made (KB_BENCH_BUILD=reuse).
+import { afterEach, expect, it } from "vitest";
+import { endLeftovers, expectNothingLeft, snapshot, type Started } from "./helpers/stopping";
+import { openTerminal, type Terminal } from "./helpers/terminal";
+
+let term: Terminal | undefined;
+let started: Started | undefined;
+let pgPort = 0;
+
+afterEach(async () => {
+  await endLeftovers(term, pgPort, started);
+});
+
+it("npm run bench stops its server and its database on Ctrl-C", async () => {
+  term = openTerminal("exec npm run bench", { KB_BENCH_BUILD: "reuse" });
+  pgPort = Number((await term.waitFor(/starting PostgreSQL on 127\.0\.0\.1:(\d+)/, 120_000))[1]);
+  const appPort = Number((await term.waitFor(/starting the app on http:\/\/127\.0\.0\.1:(\d+)/, 120_000))[1]);
+  await term.waitFor(/HTTP benchmark against/, 120_000);
+  started = snapshot(term, pgPort);
+  expect(started.processes.some((p) => p.args.includes("bench-http.ts")), "the HTTP benchmark runs").toBe(true);
+
+  term.interrupt();
+  expect(await term.exited(90_000)).toBe(130);
+  await expectNothingLeft(started, [appPort, pgPort]);
+  expect(term.output()).toMatch(/stopping the app[\s\S]*stopping PostgreSQL/);
+});

@@ -1,0 +1,134 @@
+// `npm run demo` in a terminal, stopped the ways a person stops it: Ctrl-C (which reaches npm and the demo
+// script at once), Ctrl-C pressed again while it stops, SIGTERM to its process group, the terminal closed.
+// Each time the app and then PostgreSQL must stop before the prompt returns, and a kit written in the first
+// run must still be there in the next. A demo of its own beside any other (ports, cluster), serving the
+// build `npm test` made (KB_DEMO_BUILD=reuse).
+import { rmSync } from "node:fs";
+import { join } from "node:path";
+import { afterAll, afterEach, beforeAll, describe, expect, it } from "vitest";
+import { freePort } from "../helpers/ports";
+import { endLeftovers, expectNothingLeft, snapshot, type Started } from "./helpers/stopping";
+import { openTerminal, repoRoot, type Terminal } from "./helpers/terminal";
+
+const CLUSTER = "pg-interrupt-demo";
+const KIT_NAME = `Interrupt check ${Date.now()}`;
+const START_MS = 180_000;
+const STOP_MS = 90_000;
+
+let appPort: number;
+let pgPort: number;
+let term: Terminal | undefined;
+let started: Started | undefined;
+const dataDirs = new Set<string>();
+
+beforeAll(async () => {
+  appPort = await freePort();
+  pgPort = await freePort();
+  rmSync(join(repoRoot, ".data", CLUSTER), { recursive: true, force: true });
+});
+
+// Only does anything when a test failed half-way.
+afterEach(async () => {
+  await endLeftovers(term, pgPort, started);
+  term = started = undefined;
+});
+
+afterAll(() => {
+  for (const dir of dataDirs) rmSync(dir, { recursive: true, force: true });
+  rmSync(join(repoRoot, ".data", `${CLUSTER}.password`), { force: true });
+});
+
+const base = () => `http://127.0.0.1:${appPort}`;
+
+async function startDemo(): Promise<{ term: Terminal; started: Started }> {
+  term = openTerminal("exec npm run demo", {
+    KB_DEMO_PORT: String(appPort),
+    KB_DEMO_PG_PORT: String(pgPort),
+    KB_DEMO_PG_NAME: CLUSTER,
+    KB_DEMO_BUILD: "reuse",
+  });
+  await term.waitFor(/Press Ctrl-C to stop the app and the database/, START_MS);
+  const health = await fetch(`${base()}/api/health`);
+  expect(health.status).toBe(200);
+  started = snapshot(term, pgPort);
+  expect(started.processes.some((p) => p.args.includes("scripts/serve.mjs")), "the app runs under the terminal").toBe(true);
+  dataDirs.add(started.pgDataDir);
+  return { term, started };
+}
+
+/** Signs in as the demo's owner with what the demo printed, and returns the cookie and the demo workspace. */
+async function signInAsPrinted(output: string): Promise<{ cookie: string; workspaceId: string }> {
+  const password = /password for all: (\S+)\)/.exec(output)?.[1];
+  const email = /owner\s+(\S+@\S+)/.exec(output)?.[1];
+  expect(password && email, "the demo prints how to sign in").toBeTruthy();
+  const res = await fetch(`${base()}/api/auth/sign-in/email`, {
+    method: "POST",
+    headers: { "content-type": "application/json", origin: base() },
+    body: JSON.stringify({ email, password }),
+  });
+  expect(res.status).toBe(200);
+  const cookie = res.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
+  const list = (await (await fetch(`${base()}/api/workspaces`, { headers: { cookie } })).json()) as { workspaces: { id: string; name: string }[] };
+  const workspace = list.workspaces.find((w) => w.name === "Harrow Flats RC Works");
+  expect(workspace, "the demo workspace").toBeDefined();
+  return { cookie, workspaceId: workspace!.id };
+}
+
+async function kitNames(output: string): Promise<string[]> {
+  const { cookie, workspaceId } = await signInAsPrinted(output);
+  const res = await fetch(`${base()}/api/workspaces/${workspaceId}/kits`, { headers: { cookie } });
+  expect(res.status).toBe(200);
+  return ((await res.json()) as { kits: { name: string }[] }).kits.map((k) => k.name);
+}
+
+describe("npm run demo stops the app and then the database", () => {
+  it("on Ctrl-C, keeping what was written", async () => {
+    const { term, started } = await startDemo();
+    const { cookie, workspaceId } = await signInAsPrinted(term.output());
+    const created = await fetch(`${base()}/api/workspaces/${workspaceId}/kits`, {
+      method: "POST",
+      headers: { "content-type": "application/json", origin: base(), cookie },
+      body: JSON.stringify({ name: KIT_NAME, scale: "1:10" }),
+    });
+    expect(created.status).toBe(201);
+
+    term.interrupt();
+    expect(await term.exited(STOP_MS)).toBe(0); // stopping on Ctrl-C is how the demo ends
+    await expectNothingLeft(started, [appPort, pgPort]);
+    expect(term.output()).toMatch(/stopping the app[\s\S]*stopping PostgreSQL/);
+  });
+
+  it("on Ctrl-C pressed again and again while it stops; the kit of the first run is still there", async () => {
+    const { term, started } = await startDemo();
+    expect(await kitNames(term.output())).toContain(KIT_NAME);
+
+    const from = term.output().length;
+    term.interrupt();
+    await term.waitFor(/stopping the app/, STOP_MS, from);
+    term.interrupt();
+    await term.waitFor(/stopping PostgreSQL/, STOP_MS, from);
+    term.interrupt();
+    expect(await term.exited(STOP_MS)).toBe(0);
+    await expectNothingLeft(started, [appPort, pgPort]);
+  });
+
+  it("on SIGTERM to its process group", async () => {
+    const { term, started } = await startDemo();
+    expect(await kitNames(term.output())).toContain(KIT_NAME);
+
+    term.signalForeground("SIGTERM");
+    expect(await term.exited(STOP_MS)).toBe(0);
+    await expectNothingLeft(started, [appPort, pgPort]);
+    expect(term.output()).toMatch(/stopping the app[\s\S]*stopping PostgreSQL/);
+  });
+
+  it("when its terminal is closed", async () => {
+    const { term, started } = await startDemo();
+    expect(await kitNames(term.output())).toContain(KIT_NAME);
+
+    term.hangUp();
+    await term.exited(STOP_MS);
+    // No prompt comes back to wait for: the script stops on its own, within the time a stop takes.
+    await expectNothingLeft(started, [appPort, pgPort], 30_000);
+  });
+});

@@ -1,0 +1,57 @@
+// What every interrupt test checks once a command was stopped: it ended, and nothing it started is left.
+import { existsSync } from "node:fs";
+import { join } from "node:path";
+import { expect } from "vitest";
+import { listening } from "../../helpers/ports";
+import { dataDirOf, descendants, listProcesses, postgresOn, stillRunning, type Proc } from "./processes";
+import { sleep, type Terminal } from "./terminal";
+
+/** What a running command started: its process tree, and the PostgreSQL server on `pgPort` (which pg_ctl detached from it). */
+export interface Started {
+  processes: Proc[];
+  pgDataDir: string;
+}
+
+export function snapshot(term: Terminal, pgPort: number): Started {
+  const procs = listProcesses();
+  const pg = postgresOn(pgPort, procs);
+  expect(pg.length, `a PostgreSQL server on port ${pgPort}`).toBeGreaterThan(0);
+  return { processes: [...descendants(term.pid, procs), ...pg], pgDataDir: dataDirOf(pg[0]!) };
+}
+
+const describe = (procs: Proc[]) => procs.map((p) => `${p.pid} ${p.args}`);
+
+/**
+ * Nothing of `started` runs any more, no app or PostgreSQL listens on the ports, and PostgreSQL shut down
+ * cleanly (it removes postmaster.pid only then). Checked the moment the command returned, as the user's
+ * prompt comes back; `settleMs` gives a command whose terminal was closed that long to finish stopping.
+ */
+export async function expectNothingLeft(started: Started, ports: number[], settleMs = 0): Promise<void> {
+  const deadline = Date.now() + settleMs;
+  while (Date.now() < deadline && stillRunning(started.processes).length > 0) await sleep(200);
+  expect(describe(stillRunning(started.processes))).toEqual([]);
+  for (const port of ports) expect(await listening(port), `something still listens on ${port}`).toBe(false);
+  expect(existsSync(join(started.pgDataDir, "postmaster.pid")), "PostgreSQL was not shut down cleanly").toBe(false);
+}
+
+/**
+ * After a failed test: ends whatever the command left (the terminal, the app, a PostgreSQL server on
+ * `pgPort`, which gets a fast shutdown), so the next test and the next run start clean.
+ */
+export async function endLeftovers(term: Terminal | undefined, pgPort: number, started?: Started): Promise<void> {
+  term?.kill();
+  for (const p of stillRunning(started?.processes ?? [])) if (!p.args.includes("postgres")) tryKill(p.pid, "SIGKILL");
+  const master = postgresOn(pgPort)[0];
+  if (!master) return;
+  tryKill(master.pid, "SIGINT");
+  const deadline = Date.now() + 20_000;
+  while (Date.now() < deadline && stillRunning([master]).length > 0) await sleep(200);
+}
+
+function tryKill(pid: number, signal: NodeJS.Signals): void {
+  try {
+    process.kill(pid, signal);
+  } catch {
+    // already gone
+  }
+}
