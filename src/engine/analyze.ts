@@ -171,7 +171,8 @@ function describeTravel(travelMm: number): string {
   return travelMm > 0 ? `${travelMm.toFixed(1)} mm of bump` : `${(-travelMm).toFixed(1)} mm of droop`;
 }
 
-function materialFigure(m: KitMaterial): MaterialFigure {
+/** The engine's figure for a layout's material: a catalogue entry by id, or the designer's own figures. */
+export function materialFigure(m: KitMaterial): MaterialFigure {
   if (m.kind === "catalogue") return materialById(m.id);
   const source = { provenance: ["found" as const], citation: m.source };
   if (m.printed) {
