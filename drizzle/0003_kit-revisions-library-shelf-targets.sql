@@ -55,6 +55,7 @@ ALTER TABLE "kits" ADD COLUMN "max_joint_angle_deg" double precision;--> stateme
 ALTER TABLE "kits" ADD COLUMN "ackermann_pct" double precision;--> statement-breakpoint
 ALTER TABLE "kits" ADD COLUMN "safety_factor" double precision;--> statement-breakpoint
 ALTER TABLE "kits" ADD COLUMN "neck_clearance_mm" double precision;--> statement-breakpoint
+ALTER TABLE "kits" ADD COLUMN "shelf_refs" text[] DEFAULT '{}'::text[] NOT NULL;--> statement-breakpoint
 ALTER TABLE "kit_revisions" ADD CONSTRAINT "kit_revisions_kit_id_kits_id_fk" FOREIGN KEY ("kit_id") REFERENCES "public"."kits"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "kit_revisions" ADD CONSTRAINT "kit_revisions_author_id_users_id_fk" FOREIGN KEY ("author_id") REFERENCES "public"."users"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "shelf_items" ADD CONSTRAINT "shelf_items_workspace_id_workspaces_id_fk" FOREIGN KEY ("workspace_id") REFERENCES "public"."workspaces"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
@@ -72,8 +73,11 @@ CREATE INDEX "kits_workspace_ackermann_idx" ON "kits" USING btree ("workspace_id
 CREATE INDEX "kits_workspace_safety_idx" ON "kits" USING btree ("workspace_id","safety_factor");--> statement-breakpoint
 CREATE INDEX "kits_workspace_clearance_idx" ON "kits" USING btree ("workspace_id","neck_clearance_mm");--> statement-breakpoint
 CREATE INDEX "kits_tags_idx" ON "kits" USING gin ("tags");--> statement-breakpoint
-ALTER TABLE "kits" ADD CONSTRAINT "kits_head_revision_positive" CHECK ("kits"."head_revision" > 0);--> statement-breakpoint
--- Every kit saved before revisions were kept becomes revision 1 of itself; its summary is computed by the
--- engine right after the migrations (scripts/migrate.ts backfills every revision without one).
+CREATE INDEX "kits_shelf_refs_idx" ON "kits" USING gin ("shelf_refs");--> statement-breakpoint
+-- Every kit saved before revisions were kept becomes revision 1 of itself, carrying the layout the kit row
+-- held; its summary is computed by the engine right after the migrations (scripts/migrate.ts backfills
+-- every revision without one). Then the layout lives only in kit_revisions.
 INSERT INTO "kit_revisions" ("kit_id", "number", "layout", "note", "kind", "author_id", "created_at")
-SELECT "id", 1, "layout", '', 'migrated', COALESCE("updated_by", "created_by"), "updated_at" FROM "kits";
+SELECT "id", 1, "layout", '', 'migrated', COALESCE("updated_by", "created_by"), "updated_at" FROM "kits";--> statement-breakpoint
+ALTER TABLE "kits" DROP COLUMN "layout";--> statement-breakpoint
+ALTER TABLE "kits" ADD CONSTRAINT "kits_head_revision_positive" CHECK ("kits"."head_revision" > 0);

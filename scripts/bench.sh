@@ -1,12 +1,11 @@
 #!/usr/bin/env bash
 # `npm run bench`: performance checks.
 #  1. the engine benchmark (scripts/bench-engine.ts), in-process, no services;
-#  2. the HTTP benchmark (scripts/bench-http.ts) and
-#  3. the browser benchmark (scripts/bench-browser.ts: the editor drag, the kit page), both against one
+#  2. the HTTP benchmark (scripts/bench-http.ts),
+#  3. the library benchmark (scripts/bench-library.ts: a page of 50 of 5,000 kits sorted by a readout) and
+#  4. the browser benchmark (scripts/bench-browser.ts: the editor drag, the kit page), all against one
 #     production server on 127.0.0.1:3200 with its own throwaway database (.data/pg-bench on 54349) and
 #     object store (.data/s3-bench on 54402), stopped afterwards.
-# KB_BENCH_BUILD=reuse serves the existing .next build instead of building (the interrupt test of
-# `npm test` stops a bench run).
 set -euo pipefail
 
 # shellcheck source=scripts/lib/runner.sh
@@ -30,9 +29,10 @@ else
   kb_say "no scripts/bench-engine.ts yet: engine benchmark skipped"
 fi
 
-# --- HTTP and browser benchmarks ------------------------------------------------------------------
-# Both read BENCH_BASE_URL (the server below); DATABASE_URL is its own database, migrated (each
-# benchmark makes the accounts and kits it needs through the API).
+# --- HTTP, library and browser benchmarks -----------------------------------------------------------
+# All read BENCH_BASE_URL (the server below); DATABASE_URL is its own database, migrated (each
+# benchmark makes the accounts and kits it needs: through the API, or for the library's 5,000 kits
+# straight into that database).
 APP_PORT=$(kb_free_port 3200) || kb_die "no free port for the bench app (3200-3220)"
 PG_PORT=$(kb_free_port 54349) || kb_die "no free port for the bench PostgreSQL (54349-54369)"
 kb_env_bench "$APP_PORT"
@@ -46,5 +46,7 @@ kb_next_build_or_reuse "${KB_BENCH_BUILD:-}" || kb_die "the build failed"
 kb_app_start "$APP_PORT" .data/app-bench.log || kb_die "the app did not start (log: .data/app-bench.log)"
 kb_say "HTTP benchmark against $BENCH_BASE_URL"
 npx --no-install tsx scripts/bench-http.ts
+kb_say "library benchmark against $BENCH_BASE_URL"
+npx --no-install tsx scripts/bench-library.ts
 kb_say "browser benchmark against $BENCH_BASE_URL"
 npx --no-install tsx scripts/bench-browser.ts

@@ -94,12 +94,13 @@ describe("logging a run", () => {
     const tau = (16 * torqueNmm) / (Math.PI * 5 ** 3); // the layout's 5.0 mm solid neck
     const allowable = 600 / Math.sqrt(3);
     expect(torqueNmm).toBe(1350);
-    expect(run.prediction!.ok).toBe(true);
-    if (!run.prediction!.ok) return;
-    expect(run.prediction.shaftTorqueNmm).toBeCloseTo(1350, 9);
-    expect(run.prediction.shearStressMpa).toBeCloseTo(tau, 9);
-    expect(run.prediction.safetyFactor).toBeCloseTo(allowable / tau, 9);
-    expect(run.prediction.safetyFactor).toBeCloseTo(6.2979, 3);
+    const prediction = run.prediction!;
+    expect(prediction.ok).toBe(true);
+    if (!prediction.ok) return;
+    expect(prediction.shaftTorqueNmm).toBeCloseTo(1350, 9);
+    expect(prediction.shearStressMpa).toBeCloseTo(tau, 9);
+    expect(prediction.safetyFactor).toBeCloseTo(allowable / tau, 9);
+    expect(prediction.safetyFactor).toBeCloseTo(6.2979, 3);
   });
 
   it("with the layout's own motor, gearing and material the prediction is the revision's summary safety factor", async () => {
@@ -144,7 +145,8 @@ describe("logging a run", () => {
 
   it("a run that broke says where; an edit re-predicts a new set-up and keeps optimistic locking", async () => {
     const made = (await logRun({ outcome: "broke", failureLocation: "neck, 2 mm from the ball", setup: setupOf(2) })).json.run as TestRun;
-    const sfBefore = made.prediction!.ok ? made.prediction.safetyFactor : NaN;
+    const p = made.prediction!;
+    const sfBefore = p.ok ? p.safetyFactor : NaN;
     const edited = await call(runRoute.PATCH, "PATCH", `${runsPath(ws, kit)}/${made.id}`, R(ws, kit, made.id), { cookie: owner.cookie, body: { version: 1, setup: setupOf(1) } });
     expect(edited.status).toBe(200);
     // Half the motor torque: twice the safety factor (n ∝ 1/T, REFERENCES §6.1).

@@ -122,19 +122,26 @@ describe("signed-in pages", () => {
     await ensureKit();
     const page = await pageAs(owner);
     await page.goto(`/workspaces/${workspaceId}/kits`);
-    await page.getByRole("list", { name: "Kits" }).getByText("Tarnwick 10 front corner").waitFor();
+    await page.getByRole("table", { name: "Kits" }).getByText("Tarnwick 10 front corner").waitFor();
     await expectAccessible(page, { name: "kits-with-kit" });
   });
 
-  it("kits list with the delete confirmation open and the new-kit form's errors shown", async () => {
+  it("kits list with the delete confirmation open", async () => {
     await ensureKit();
     const page = await pageAs(owner);
     await page.goto(`/workspaces/${workspaceId}/kits`);
     await page.getByRole("button", { name: "Delete Tarnwick 10 front corner" }).click();
-    await page.getByText("Delete this kit?").waitFor();
+    await page.getByTestId("delete-dialog").getByText(/revisions are removed/).waitFor();
+    await expectAccessible(page, { name: "kits-confirm-delete" });
+  });
+
+  it("kits list with the new-kit form's errors shown", async () => {
+    const page = await pageAs(owner);
+    await page.goto(`/workspaces/${workspaceId}/kits`);
+    await page.getByTestId("new-kit").click();
     await page.getByRole("button", { name: "Create kit" }).click();
     await page.locator("#kit-name-error").waitFor();
-    await expectAccessible(page, { name: "kits-confirm-and-errors" });
+    await expectAccessible(page, { name: "kits-new-kit-errors" });
   });
 
   it("a kit's page, once its figures and charts are drawn", async () => {

@@ -20,19 +20,20 @@ describe("a new designer", () => {
     expect(selected).toBe("Lena's workspace");
     await page.getByText("No kits yet").waitFor();
 
+    await page.getByTestId("new-kit").click();
     await page.getByLabel("Name").fill("Sandpiper front corner");
     await page.getByRole("button", { name: "Create kit" }).click();
-    const list = page.getByRole("list", { name: "Kits" });
+    const list = page.getByRole("table", { name: "Kits" });
     await list.getByText("Sandpiper front corner").waitFor();
 
     await page.getByRole("button", { name: "Rename Sandpiper front corner" }).click();
-    const rename = page.getByLabel("New name for Sandpiper front corner");
+    const rename = page.getByLabel("New name");
     await rename.fill("Sandpiper front corner, 4 mm neck");
     await rename.press("Enter");
     await list.getByText("Sandpiper front corner, 4 mm neck").waitFor();
 
     await page.reload();
-    await page.getByRole("list", { name: "Kits" }).getByText("Sandpiper front corner, 4 mm neck").waitFor();
+    await page.getByRole("table", { name: "Kits" }).getByText("Sandpiper front corner, 4 mm neck").waitFor();
     expect(await page.getByTestId("kit-name").allTextContents()).toEqual(["Sandpiper front corner, 4 mm neck"]);
 
     await page.getByRole("button", { name: "Sign out" }).click();
@@ -62,6 +63,7 @@ describe("a kit's analysis sheet", () => {
     await page.getByLabel("Password").fill("steer-lock-42");
     await page.getByRole("button", { name: "Create account" }).click();
     await page.waitForURL(/\/workspaces\/[^/]+\/kits$/);
+    await page.getByTestId("new-kit").click();
     await page.getByLabel("Name").fill("Heron corner");
     await page.getByRole("button", { name: "Create kit" }).click();
     await page.getByRole("link", { name: "Heron corner" }).click();

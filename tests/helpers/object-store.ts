@@ -78,7 +78,7 @@ export async function upload<P>(handler: Handler<P>, method: string, path: strin
           c.close();
         },
       })
-    : bytes;
+    : new Blob([new Uint8Array(bytes)]);
   const init: RequestInit & { duplex?: "half" } = { method, headers, body, ...(opts.streamed ? { duplex: "half" } : {}) };
   const res = await handler(new Request(`${BASE}${path}`, init), { params: Promise.resolve(params) });
   const text = await res.text();

@@ -10,7 +10,7 @@ import { summarizeAnalysis, type StoredSummary } from "@/contracts/revisions";
 import { analyzeLayout } from "@/engine";
 import { db } from "@/server/db/client";
 import { kitRevisions, kits, workspaces } from "@/server/db/schema";
-import { createKit, writeHeadRevision } from "@/server/data/kits";
+import { createKit, getKit, writeHeadRevision } from "@/server/data/kits";
 import { backfillSummaries } from "../../scripts/lib/backfill-summaries";
 import { signUp } from "../helpers/api";
 
@@ -56,8 +56,8 @@ describe("writeHeadRevision under a held row lock", () => {
 
     const revs = await db.select({ number: kitRevisions.number, note: kitRevisions.note }).from(kitRevisions).where(eq(kitRevisions.kitId, kitId));
     expect(revs.sort((a, b) => a.number - b.number)).toEqual([{ number: 1, note: "" }, { number: 2, note: "first" }]);
-    const [k] = await db.select({ version: kits.version, head: kits.headRevision, layout: kits.layout }).from(kits).where(eq(kits.id, kitId));
-    expect(k).toEqual({ version: 2, head: 2, layout: TARNWICK_10_THIN_NECK });
+    const k = await getKit(workspaceId, kitId);
+    expect(k).toMatchObject({ version: 2, headRevision: 2, layout: TARNWICK_10_THIN_NECK });
   });
 });
 

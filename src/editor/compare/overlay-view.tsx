@@ -52,6 +52,13 @@ function Line({ t, points, colour, dash, width, closed }: { t: ViewTransform; po
   return <Shape points={pts(t, points)} fill="none" stroke={colour} strokeWidth={width} strokeDasharray={dash} strokeLinejoin="round" strokeLinecap="round" />;
 }
 
+/** A shaft as its outline at the neck diameter (so a thinner neck shows), from joint centre to joint centre. */
+function band(a: PlanePoint, b: PlanePoint, widthMm: number): PlanePoint[] {
+  const len = Math.hypot(b[0] - a[0], b[1] - a[1]) || 1;
+  const n: PlanePoint = [(-(b[1] - a[1]) / len) * (widthMm / 2), ((b[0] - a[0]) / len) * (widthMm / 2)];
+  return [[a[0] + n[0], a[1] + n[1]], [b[0] + n[0], b[1] + n[1]], [b[0] - n[0], b[1] - n[1]], [a[0] - n[0], a[1] - n[1]]];
+}
+
 function FrontItem({ t, p }: { t: ViewTransform; p: Posed }) {
   const d = frontDrawing(p.pose, p.layout);
   const s = ITEM_STYLES[p.index]!;
@@ -61,7 +68,7 @@ function FrontItem({ t, p }: { t: ViewTransform; p: Posed }) {
       <Line t={t} points={d.lowerArm} colour={s.colour} dash={s.dash} width={2.5} />
       <Line t={t} points={d.upperArm} colour={s.colour} dash={s.dash} width={2.5} />
       <Line t={t} points={d.upright} closed colour={s.colour} dash={s.dash} width={2} />
-      <Line t={t} points={d.shaft} colour={s.colour} dash={s.dash} width={3} />
+      <Line t={t} points={band(d.shaft[0], d.shaft[1], p.layout.drive.neckDiameterMm)} closed colour={s.colour} dash={s.dash} width={1.5} />
       <Line t={t} points={d.kingpinAxis} colour={s.colour} dash="1 3" width={1} />
     </g>
   );
@@ -77,7 +84,7 @@ function TopItem({ t, p }: { t: ViewTransform; p: Posed }) {
           <Line t={t} points={w.tyre} closed colour={s.colour} dash={s.dash} width={1.5} />
           <Line t={t} points={w.steeringArm} colour={s.colour} dash={s.dash} width={2.5} />
           <Line t={t} points={w.tieRod} colour={s.colour} dash={s.dash} width={2} />
-          <Line t={t} points={w.shaft} colour={s.colour} dash={s.dash} width={2.5} />
+          <Line t={t} points={band(w.shaft[0], w.shaft[1], p.layout.drive.neckDiameterMm)} closed colour={s.colour} dash={s.dash} width={1.5} />
         </g>
       ))}
       <Line t={t} points={d.rack} colour={s.colour} dash={s.dash} width={3} />
@@ -95,7 +102,15 @@ export function OverlayView({ items, view, steer, labels }: { items: readonly Co
     }),
     [items, steer],
   );
-  const box = union(posed.map((p) => (view === "front" ? frontBox(p.layout) : topBox(p.layout))));
+  // The static frame of every layout, widened to take in each wheel as posed (a steered wheel swings out).
+  const box = union([
+    ...posed.map((p) => (view === "front" ? frontBox(p.layout) : topBox(p.layout))),
+    ...posed.flatMap((p) => {
+      const drawn = view === "front" ? frontDrawing(p.pose, p.layout).tyre : [...topDrawing(p.pose, p.layout).left.tyre, ...topDrawing(p.pose, p.layout).right.tyre];
+      const b = boxOf(drawn);
+      return b ? [b] : [];
+    }),
+  ]);
   const t = box ? fitBox(box, W, H, 18) : null;
   const title = view === "front" ? "Front view, overlaid (seen from ahead; y left →, z up ↑)" : "Top view, overlaid (seen from above; forward is down)";
   const missing = items.map((it, i) => (posed.some((p) => p.index === i) ? null : labels[i])).filter(Boolean);

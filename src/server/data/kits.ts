@@ -79,7 +79,7 @@ export function kitIdOrNotFound(raw: string): string {
 const SORT_COLUMNS: Record<LibrarySort, SQL | AnyPgColumn> = {
   name: sql`lower(${kits.name})`,
   scale: kits.scale,
-  author: users.name,
+  author: sql`(select ${users.name} from ${users} where ${users.id} = ${kits.createdBy})`,
   updatedAt: kits.updatedAt,
   createdAt: kits.createdAt,
   headRevision: kits.headRevision,
@@ -125,7 +125,14 @@ function libraryFilter(workspaceId: string, q: LibraryQuery, targets: Targets): 
   else if (q.status === "archived") where.push(isNotNull(kits.archivedAt));
   if (q.q) {
     const p = likePattern(q.q);
-    where.push(or(ilike(kits.name, p), ilike(users.name, p), ilike(kits.scale, p), sql`exists (select 1 from unnest(${kits.tags}) as t(tag) where t.tag ilike ${p})`));
+    where.push(
+      or(
+        ilike(kits.name, p),
+        ilike(kits.scale, p),
+        sql`exists (select 1 from unnest(${kits.tags}) as t(tag) where t.tag ilike ${p})`,
+        sql`exists (select 1 from ${users} where ${users.id} = ${kits.createdBy} and ${users.name} ilike ${p})`,
+      ),
+    );
   }
   if (q.scale?.length) where.push(inArray(kits.scale, q.scale));
   if (q.tags?.length) where.push(arrayContains(kits.tags, q.tags));
@@ -144,29 +151,29 @@ function libraryFilter(workspaceId: string, q: LibraryQuery, targets: Targets): 
   return and(...where)!;
 }
 
-/** One page of the workspace's kits, filtered and ordered on the server (missing figures sort last). */
+/**
+ * One page of the workspace's kits, filtered and ordered on the server (missing figures sort last). The
+ * page is picked from the kits table alone (narrow rows, the filter and the order), and only its 50 rows
+ * are joined to their authors; the total is counted beside it.
+ */
 export async function queryLibrary(workspaceId: string, q: LibraryQuery): Promise<LibraryPage> {
   const { targets } = await getTargets(workspaceId);
   const where = libraryFilter(workspaceId, q, targets);
   const column = SORT_COLUMNS[q.sort];
   const order = q.dir === "asc" ? sql`${column} asc nulls last` : sql`${column} desc nulls last`;
-  const rows = await db
-    .select({ ...summaryColumns, total: sql<number>`count(*) over ()`.mapWith(Number) })
-    .from(kits)
-    .leftJoin(users, eq(users.id, kits.createdBy))
-    .leftJoin(editors, eq(editors.id, kits.updatedBy))
-    .leftJoin(origins, eq(origins.id, kits.originKitId))
-    .where(where)
-    .orderBy(order, asc(kits.id))
-    .limit(q.size)
-    .offset((q.page - 1) * q.size);
-  let total = rows[0]?.total ?? 0;
-  if (rows.length === 0 && q.page > 1) {
-    // Past the last page: the window count has no row to ride on.
-    const [c] = await db.select({ n: sql<number>`count(*)`.mapWith(Number) }).from(kits).leftJoin(users, eq(users.id, kits.createdBy)).where(where);
-    total = c?.n ?? 0;
-  }
-  return { kits: rows.map(({ total: _t, ...r }) => (void _t, toSummary(r))), total, page: q.page, size: q.size, targets };
+  const page = db.select({ pageId: kits.id }).from(kits).where(where).orderBy(order, asc(kits.id)).limit(q.size).offset((q.page - 1) * q.size).as("page");
+  const [rows, [counted]] = await Promise.all([
+    db
+      .select(summaryColumns)
+      .from(page)
+      .innerJoin(kits, eq(kits.id, page.pageId))
+      .leftJoin(users, eq(users.id, kits.createdBy))
+      .leftJoin(editors, eq(editors.id, kits.updatedBy))
+      .leftJoin(origins, eq(origins.id, kits.originKitId))
+      .orderBy(order, asc(kits.id)),
+    db.select({ n: sql<number>`count(*)`.mapWith(Number) }).from(kits).where(where),
+  ]);
+  return { kits: rows.map(toSummary), total: counted?.n ?? 0, page: q.page, size: q.size, targets };
 }
 
 /** The tags and authors of the workspace's kits, with counts, for the library's filter choices. */
@@ -189,8 +196,9 @@ export async function libraryFacets(workspaceId: string) {
 /** A kit of this workspace; a kit of another workspace is "not found", never "forbidden". */
 export async function getKit(workspaceId: string, kitId: string): Promise<KitDetail> {
   const [row] = await db
-    .select({ ...summaryColumns, workspaceId: kits.workspaceId, layout: kits.layout })
+    .select({ ...summaryColumns, workspaceId: kits.workspaceId, layout: kitRevisions.layout })
     .from(kits)
+    .innerJoin(kitRevisions, and(eq(kitRevisions.kitId, kits.id), eq(kitRevisions.number, kits.headRevision)))
     .leftJoin(users, eq(users.id, kits.createdBy))
     .leftJoin(editors, eq(editors.id, kits.updatedBy))
     .leftJoin(origins, eq(origins.id, kits.originKitId))
@@ -199,6 +207,12 @@ export async function getKit(workspaceId: string, kitId: string): Promise<KitDet
   if (!row) throw notFound("Kit");
   const { workspaceId: ws, layout, ...summary } = row;
   return { ...toSummary(summary), workspaceId: ws, layout };
+}
+
+/** The ids of the shelf items a layout takes figures from (its `shelf` field). */
+export function shelfRefsOf(layout: unknown): string[] {
+  const refs = (layout as { shelf?: Record<string, unknown> } | null)?.shelf;
+  return refs && typeof refs === "object" ? Object.values(refs).filter((v): v is string => typeof v === "string") : [];
 }
 
 export type RevisionWrite = { note?: string; kind: RevisionKind; restoredFrom?: number | null };
@@ -225,7 +239,7 @@ export async function createKit(
         scale: fields.scale,
         notes: fields.notes ?? "",
         tags: fields.tags ?? [],
-        layout,
+        shelfRefs: shelfRefsOf(layout),
         originKitId: origin?.kitId ?? null,
         originRevision: origin?.revision ?? null,
         ...readoutColumns(summary),
@@ -279,7 +293,7 @@ export async function updateKit(workspaceId: string, kitId: string, userId: stri
 type Tx = Parameters<Parameters<typeof db.transaction>[0]>[0];
 
 /**
- * Inside a transaction: makes `layout` the kit's next revision if the kit is still at `basedOn` (the update's
+ * Inside a transaction: makes `layout` the kit's next (head) revision if the kit is still at `basedOn` (the update's
  * row lock orders concurrent writers; the loser finds the version moved). Returns the new revision's
  * number, or null when the version was stale (nothing written).
  */
@@ -292,7 +306,7 @@ export async function writeHeadRevision(
 ): Promise<number | null> {
   const [row] = await tx
     .update(kits)
-    .set({ layout, version: at.basedOn + 1, headRevision: sql`${kits.headRevision} + 1`, ...readoutColumns(summary), updatedBy: at.userId, updatedAt: new Date() })
+    .set({ version: at.basedOn + 1, headRevision: sql`${kits.headRevision} + 1`, shelfRefs: shelfRefsOf(layout), ...readoutColumns(summary), updatedBy: at.userId, updatedAt: new Date() })
     .where(and(eq(kits.workspaceId, at.workspaceId), eq(kits.id, at.kitId), eq(kits.version, at.basedOn)))
     .returning({ headRevision: kits.headRevision });
   if (!row) return null;

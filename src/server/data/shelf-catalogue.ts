@@ -3,7 +3,20 @@ import type { JointSpec, MaterialSpec } from "@/contracts/shelf";
 import { DRIVE_JOINT_TYPES, MATERIALS } from "@/engine";
 
 type FigureSource = { readonly provenance: readonly string[]; readonly citation: string };
-const cite = (s: FigureSource) => `${s.citation} [${s.provenance.join(", ")}]`.slice(0, 500);
+
+/**
+ * A catalogue citation as the product shows it: the published source and how it was found, without the
+ * pointers into the team's own working notes (those are for us, not for the people who design with it).
+ */
+export function publicCitation(text: string): string {
+  return text
+    .replace(/[,;]?\s*via REFERENCES §[\d.]+/g, "")
+    .replace(/\s*\(REFERENCES §[\d.]+[^)]*\)/g, "")
+    .replace(/[,;]?\s*REFERENCES §[\d.]+(\s*\[[A-Z]\](\/\[[A-Z]\])?)?/g, "")
+    .trim();
+}
+
+const cite = (s: FigureSource) => `${publicCitation(s.citation)} [${s.provenance.join(", ")}]`.slice(0, 500);
 
 export type CatalogueItem =
   | { kind: "material"; name: string; catalogueId: string; spec: MaterialSpec }
@@ -43,7 +56,7 @@ export function catalogueShelf(): CatalogueItem[] {
       ratedAngleSource: cite({ ...j.ratedAngleSource, citation: `${j.ratedAngleSource.citation}; typical of ${j.ratedAngleRangeDeg[0]}–${j.ratedAngleRangeDeg[1]}°` }),
       // The catalogue says whether a joint slides, not how far: a fixed joint takes none, a plunging one needs the maker's figure.
       plungeMm: j.plunges ? null : 0,
-      plungeSource: j.plunges ? "slides axially; no figure in the catalogue, enter the maker's" : `fixed joint, takes no plunge (${j.note})`.slice(0, 500),
+      plungeSource: j.plunges ? "slides axially; no figure in the catalogue, enter the maker's" : `fixed joint, takes no plunge (${publicCitation(j.note)})`.slice(0, 500),
     },
   }));
   return [...materials, ...joints];

@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, eq, sql } from "drizzle-orm";
+import { and, arrayContains, asc, eq, sql } from "drizzle-orm";
 import { parseLayout, type Layout } from "@/contracts/layout";
 import {
   applyShelfItem,
@@ -13,7 +13,7 @@ import {
 } from "@/contracts/shelf";
 import type { StoredSummary } from "@/contracts/revisions";
 import { db } from "../db/client";
-import { kits, shelfItems, users } from "../db/schema";
+import { kitRevisions, kits, shelfItems, users } from "../db/schema";
 import { fieldIssues, HttpError, notFound } from "../http/errors";
 import { writeHeadRevision } from "./kits";
 import { readStoredLayout, requireValidLayout } from "./layouts";
@@ -30,8 +30,8 @@ export function shelfItemIdOrNotFound(raw: string): string {
   return raw.toLowerCase();
 }
 
-/** The kits whose head layout takes its figures from the item (layout.shelf[kind] = id). */
-const refersTo = (kind: string, id: string) => sql`${kits.layout}->'shelf'->>${kind} = ${id}`;
+/** The kits whose head layout takes its figures from the item (its id in kits.shelf_refs, indexed). */
+const refersTo = (id: string) => arrayContains(kits.shelfRefs, [id]);
 
 const itemColumns = {
   id: shelfItems.id,
@@ -42,7 +42,7 @@ const itemColumns = {
   version: shelfItems.version,
   updatedByName: users.name,
   updatedAt: shelfItems.updatedAt,
-  usedBy: sql<number>`(select count(*) from ${kits} where ${kits.workspaceId} = ${shelfItems.workspaceId} and ${kits.layout}->'shelf'->>${shelfItems.kind} = ${shelfItems.id}::text)`.mapWith(Number),
+  usedBy: sql<number>`(select count(*) from ${kits} where ${kits.workspaceId} = ${shelfItems.workspaceId} and ${kits.shelfRefs} @> array[${shelfItems.id}::text])`.mapWith(Number),
 };
 
 type ItemRow = { id: string; kind: string; name: string; spec: unknown; catalogueId: string | null; version: number; updatedByName: string | null; updatedAt: Date; usedBy: number };
@@ -101,11 +101,12 @@ export async function createShelfItem(workspaceId: string, userId: string, body:
 
 type KitHead = { id: string; name: string; version: number; headRevision: number; archivedAt: Date | null; layout: unknown };
 
-async function kitsReferring(workspaceId: string, item: { kind: string; id: string }): Promise<KitHead[]> {
+async function kitsReferring(workspaceId: string, item: { id: string }): Promise<KitHead[]> {
   return db
-    .select({ id: kits.id, name: kits.name, version: kits.version, headRevision: kits.headRevision, archivedAt: kits.archivedAt, layout: kits.layout })
+    .select({ id: kits.id, name: kits.name, version: kits.version, headRevision: kits.headRevision, archivedAt: kits.archivedAt, layout: kitRevisions.layout })
     .from(kits)
-    .where(and(eq(kits.workspaceId, workspaceId), refersTo(item.kind, item.id)))
+    .innerJoin(kitRevisions, and(eq(kitRevisions.kitId, kits.id), eq(kitRevisions.number, kits.headRevision)))
+    .where(and(eq(kits.workspaceId, workspaceId), refersTo(item.id)))
     .orderBy(asc(kits.name));
 }
 

@@ -11,8 +11,7 @@ export const kits = pgTable(
     scale: text("scale").notNull(),
     notes: text("notes").notNull().default(""),
     tags: text("tags").array().notNull().default(sql`'{}'::text[]`),
-    // The head revision's layout, kept here so reading a kit needs no join; kit_revisions has every one.
-    layout: jsonb("layout").$type<unknown>().notNull(),
+    // The layout lives in kit_revisions; the kit names its latest (head) revision.
     headRevision: integer("head_revision").notNull().default(1),
     // Optimistic locking: every write names the version it was based on and bumps it.
     version: integer("version").notNull().default(1),
@@ -30,6 +29,8 @@ export const kits = pgTable(
     ackermannPct: doublePrecision("ackermann_pct"),
     safetyFactor: doublePrecision("safety_factor"),
     neckClearanceMm: doublePrecision("neck_clearance_mm"),
+    // The shelf items the head layout takes figures from (layout.shelf's ids), so a shelf edit finds its kits by index.
+    shelfRefs: text("shelf_refs").array().notNull().default(sql`'{}'::text[]`),
     createdBy: text("created_by").references(() => users.id, { onDelete: "set null" }),
     // Who wrote the current version: a conflicting save names them.
     updatedBy: text("updated_by").references(() => users.id, { onDelete: "set null" }),
@@ -46,6 +47,7 @@ export const kits = pgTable(
     index("kits_workspace_safety_idx").on(t.workspaceId, t.safetyFactor),
     index("kits_workspace_clearance_idx").on(t.workspaceId, t.neckClearanceMm),
     index("kits_tags_idx").using("gin", t.tags),
+    index("kits_shelf_refs_idx").using("gin", t.shelfRefs),
     check("kits_version_positive", sql`${t.version} > 0`),
     check("kits_head_revision_positive", sql`${t.headRevision} > 0`),
   ],

@@ -63,7 +63,7 @@ export function TargetsPanel({ workspaceId, workspaceName, initial, canEdit }: {
       <div>
         <h1 className="text-xl font-semibold">Targets <span className="font-normal text-ink-muted">of {workspaceName}</span></h1>
         <p className="text-sm text-ink-muted">
-          Every kit&apos;s readouts are judged against these in the editor, the <Link className="text-steel underline" href={`/workspaces/${workspaceId}/kits`}>library</Link> and comparisons. A kit can set its own in the editor&apos;s Targets tab.
+          Every kit&apos;s readouts are judged against these in the editor, the <Link className="text-steel underline" href={`/workspaces/${workspaceId}/kits`}>library</Link> and comparisons. A kit can set its own in the editor&apos;s Kit &amp; targets tab.
           The starting values are plain starting points for a 1:10 car (common practice, not from a published source): set the ones your team designs to.
         </p>
       </div>
