@@ -164,3 +164,19 @@ export function predictionLines(runs: readonly Pick<TestRun, "number" | "outcome
       return `${head} — ${what.join(", ")}`;
     });
 }
+
+/** The set-up in a line: "Kv 4000 rpm/V at 80 A · gearing 3.45 × 2.60 (8.98:1) · lock 28° · 1.6 kg car". */
+export function setupText(s: TestSetup): string {
+  const motor = s.motor.kind === "kv" ? `Kv ${s.motor.kvRpmPerV} rpm/V at ${s.motor.currentA} A` : `${s.motor.torqueNm} N·m motor`;
+  const overall = s.gearRatios.reduce((a, b) => a * b, 1);
+  const gearing = s.gearRatios.length > 1 ? `gearing ${s.gearRatios.map((r) => r.toFixed(2)).join(" × ")} (${overall.toFixed(2)}:1)` : `gearing ${overall.toFixed(2)}:1`;
+  return [motor, gearing, s.lockDeg === null ? null : `lock ${s.lockDeg}°`, s.load || null].filter(Boolean).join(" · ");
+}
+
+/** Gear ratios typed as "3.45 × 2.6", "3.45 x 2.6" or "3.45, 2.6"; null when any part is not a number. */
+export function parseGearRatios(text: string): number[] | null {
+  const parts = text.split(/[×x*,;\s]+/i).filter(Boolean);
+  if (parts.length === 0) return null;
+  const ratios = parts.map(Number);
+  return ratios.every((r) => Number.isFinite(r)) ? ratios : null;
+}
