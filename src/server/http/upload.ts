@@ -61,12 +61,11 @@ export async function readImageUpload(req: Request, fallbackName: string, limit 
     const seen = sniffed ? `its bytes are ${sniffed.mime}` : "its bytes are not a file type we recognise";
     throw new HttpError(415, "unsupported_file_type", `The file must be ${ACCEPTED_IMAGE_WORDS}; ${seen}, whatever its name says.`, [{ path: "file", message: `Not ${ACCEPTED_IMAGE_WORDS}` }]);
   }
+  return uploadFromBytes(bytes, sniffed.mime, nameForType(cleanFileName(req.headers.get(FILE_NAME_HEADER)), sniffed.mime, fallbackName));
+}
+
+/** An upload made on the server itself (the demo's pictures), with its digest, as readImageUpload gives one. */
+export function uploadFromBytes(bytes: Buffer, type: AcceptedImageType, fileName: string): Upload {
   const digest = createHash("sha256").update(bytes).digest();
-  return {
-    bytes,
-    type: sniffed.mime,
-    fileName: nameForType(cleanFileName(req.headers.get(FILE_NAME_HEADER)), sniffed.mime, fallbackName),
-    sha256Hex: digest.toString("hex"),
-    sha256Base64: digest.toString("base64"),
-  };
+  return { bytes, type, fileName, sha256Hex: digest.toString("hex"), sha256Base64: digest.toString("base64") };
 }

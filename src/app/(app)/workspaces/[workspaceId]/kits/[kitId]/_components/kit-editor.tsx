@@ -10,6 +10,7 @@ import { KitLibraryProvider, type KitLibraryInit } from "@/editor/library/librar
 import { RevisionBanner } from "@/editor/library/revision-banner";
 import { ShelfTab } from "@/editor/library/shelf-tab";
 import { TestLogTab } from "@/editor/test-log/test-log-tab";
+import { UnderlayProvider } from "@/editor/underlay/underlay-context";
 import { EditorWorkbench } from "@/editor/workbench/editor-workbench";
 import { AnalysisSheet } from "./analysis-sheet";
 
@@ -31,10 +32,13 @@ export function KitEditor({ init, library }: { init: EditorInit; library: KitLib
   return (
     <EditorProvider init={init}>
       <KitLibraryProvider init={library}>
-        <div className="flex min-h-0 flex-1 flex-col">
-          <RevisionBanner />
-          <EditorWorkbench sideTabs={SIDE_TABS} />
-        </div>
+        {/* Reference pictures belong to the kit, not to a revision: the same under every revision shown. */}
+        <UnderlayProvider workspaceId={init.kit.workspaceId} kitId={init.kit.kitId} canWrite={library.canWrite}>
+          <div className="flex min-h-0 flex-1 flex-col">
+            <RevisionBanner />
+            <EditorWorkbench sideTabs={SIDE_TABS} />
+          </div>
+        </UnderlayProvider>
       </KitLibraryProvider>
     </EditorProvider>
   );
