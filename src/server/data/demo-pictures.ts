@@ -101,21 +101,21 @@ export function cornerDrawingSvg(layout: Layout): CornerDrawing {
   const turnDeg = 1.5;
   const f = layout.frontView;
   const P = (y: number, z: number) => ({ x: ox + y * s, y: oy - z * s });
-  const line = (a: { x: number; y: number }, b: { x: number; y: number }, width = 2.2) => `<line x1="${a.x}" y1="${a.y}" x2="${b.x}" y2="${b.y}" stroke-width="${width}"/>`;
+  const line = (a: { x: number; y: number }, b: { x: number; y: number }, width = 4) => `<line x1="${a.x}" y1="${a.y}" x2="${b.x}" y2="${b.y}" stroke-width="${width}"/>`;
   const wc = P(f.wheelCentre.y, f.wheelCentre.z);
-  const tyre = `<rect x="${wc.x - (f.tyreWidthMm * s) / 2}" y="${wc.y - f.tyreRadiusMm * s}" width="${f.tyreWidthMm * s}" height="${2 * f.tyreRadiusMm * s}" rx="${8 * s}" fill="none" stroke-width="2.4"/>`;
+  const tyre = `<rect x="${wc.x - (f.tyreWidthMm * s) / 2}" y="${wc.y - f.tyreRadiusMm * s}" width="${f.tyreWidthMm * s}" height="${2 * f.tyreRadiusMm * s}" rx="${8 * s}" fill="none" stroke-width="4.5"/>`;
   const marks = [P(0, 0), P(100, 0)] as const;
-  const cross = (m: { x: number; y: number }) => `<path d="M ${m.x - 14} ${m.y} h 28 M ${m.x} ${m.y - 14} v 28" stroke="#7a1f1f" stroke-width="2.5"/><circle cx="${m.x}" cy="${m.y}" r="9" fill="none" stroke="#7a1f1f" stroke-width="1.5"/>`;
+  const cross = (m: { x: number; y: number }) => `<path d="M ${m.x - 18} ${m.y} h 36 M ${m.x} ${m.y - 18} v 36" stroke="#9b1c1c" stroke-width="4"/><circle cx="${m.x}" cy="${m.y}" r="11" fill="none" stroke="#9b1c1c" stroke-width="3"/>`;
   const body = [
-    line(P(-40, 0), P(200, 0), 1.6),
-    `<line x1="${ox}" y1="${oy + 40}" x2="${ox}" y2="${oy - 90 * s}" stroke-dasharray="10 6" stroke-width="1.2"/>`,
-    line(P(f.lowerInner.y, f.lowerInner.z), P(f.lowerOuter.y, f.lowerOuter.z), 3.2),
-    line(P(f.upperInner.y, f.upperInner.z), P(f.upperOuter.y, f.upperOuter.z), 3.2),
-    line(P(f.lowerOuter.y, f.lowerOuter.z), P(f.upperOuter.y, f.upperOuter.z), 3),
+    line(P(-40, 0), P(200, 0), 3),
+    `<line x1="${ox}" y1="${oy + 40}" x2="${ox}" y2="${oy - 90 * s}" stroke-dasharray="10 6" stroke-width="2.5"/>`,
+    line(P(f.lowerInner.y, f.lowerInner.z), P(f.lowerOuter.y, f.lowerOuter.z), 6),
+    line(P(f.upperInner.y, f.upperInner.z), P(f.upperOuter.y, f.upperOuter.z), 6),
+    line(P(f.lowerOuter.y, f.lowerOuter.z), P(f.upperOuter.y, f.upperOuter.z), 6),
     tyre,
     `<circle cx="${wc.x}" cy="${wc.y}" r="5" fill="#2d2a26"/>`,
-    line(P(layout.drive.inboardJoint.y, layout.drive.inboardJoint.z), P(layout.drive.outboardJoint.y, layout.drive.outboardJoint.z), 1.6),
-    ...[f.lowerInner, f.lowerOuter, f.upperInner, f.upperOuter].map((q) => `<circle cx="${P(q.y, q.z).x}" cy="${P(q.y, q.z).y}" r="6" fill="#f6f1e4" stroke-width="2"/>`),
+    line(P(layout.drive.inboardJoint.y, layout.drive.inboardJoint.z), P(layout.drive.outboardJoint.y, layout.drive.outboardJoint.z), 3),
+    ...[f.lowerInner, f.lowerOuter, f.upperInner, f.upperOuter].map((q) => `<circle cx="${P(q.y, q.z).x}" cy="${P(q.y, q.z).y}" r="8" fill="#f6f1e4" stroke-width="3.5"/>`),
     `<path d="M ${marks[0].x} ${marks[0].y + 40} h ${100 * s} M ${marks[0].x} ${marks[0].y + 30} v 20 M ${marks[1].x} ${marks[1].y + 30} v 20" stroke-width="1.4"/>`,
   ].join("");
   const cx = w / 2;
@@ -128,7 +128,7 @@ export function cornerDrawingSvg(layout: Layout): CornerDrawing {
   const svg = `<svg xmlns="http://www.w3.org/2000/svg" width="${w}" height="${h}" viewBox="0 0 ${w} ${h}">
     <rect width="${w}" height="${h}" fill="#f6f1e4"/>
     <g transform="rotate(${turnDeg} ${cx} ${cy})">
-      <g stroke="#2d2a26" stroke-linecap="round" fill="none" opacity="0.9">${body}</g>
+      <g stroke="#1f1c19" stroke-linecap="round" fill="none">${body}</g>
       ${cross(marks[0])}${cross(marks[1])}
     </g>
   </svg>`;

@@ -122,5 +122,5 @@ export async function seedDemoUnderlay(workspaceId: string, author: string): Pro
   // The first mark is where the centreline meets the ground: the origin of the front view.
   const placement = placeByPicks(initialPlacement({ width: 1000, height: 640 }, [60, 40], 250), a, b, drawing.markDistanceMm, { level: true, aAtMm: [0, 0] });
   await putUnderlay(workspaceId, kitId, "front", author, placement, async () => uploadFromBytes(bytes, "image/png", "tarnwick-front-sketch.png"));
-  await db.update(kitUnderlays).set({ opacity: 0.45 }).where(and(eq(kitUnderlays.kitId, kitId), eq(kitUnderlays.view, "front")));
+  await db.update(kitUnderlays).set({ opacity: 0.6 }).where(and(eq(kitUnderlays.kitId, kitId), eq(kitUnderlays.view, "front")));
 }

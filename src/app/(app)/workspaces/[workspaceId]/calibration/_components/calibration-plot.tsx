@@ -25,6 +25,18 @@ export function calibrationDomain(m: MaterialCalibration): [number, number] {
   return [Math.min(...values) / 1.4, Math.max(...values) * 1.4];
 }
 
+/** Round ticks on a log axis: 1, 2 and 5 × 10ⁿ inside the domain. */
+export function logTicks([lo, hi]: [number, number]): number[] {
+  const ticks: number[] = [];
+  for (let e = Math.floor(Math.log10(lo)); e <= Math.ceil(Math.log10(hi)); e++) {
+    for (const m of [1, 2, 5]) {
+      const v = Number((m * 10 ** e).toPrecision(3));
+      if (v >= lo && v <= hi) ticks.push(v);
+    }
+  }
+  return ticks;
+}
+
 export function CalibrationPlot({ m }: { m: MaterialCalibration }) {
   const c = m.calibration;
   const domain = calibrationDomain(m);
@@ -40,9 +52,9 @@ export function CalibrationPlot({ m }: { m: MaterialCalibration }) {
         ) : (
           <div className="h-56">
             <ResponsiveContainer width="100%" height="100%" initialDimension={{ width: 560, height: 224 }}>
-              <ScatterChart margin={{ left: 4, right: 16, top: 16, bottom: 4 }} aria-labelledby={captionId}>
+              <ScatterChart margin={{ left: 4, right: 16, top: 16, bottom: 14 }} aria-labelledby={captionId}>
                 <CartesianGrid strokeDasharray="3 3" stroke="#0001" />
-                <XAxis dataKey="sf" type="number" scale="log" domain={domain} allowDataOverflow name="predicted safety factor" fontSize={11} tickFormatter={(v: number) => (v >= 10 ? v.toFixed(0) : v.toFixed(1))} />
+                <XAxis dataKey="sf" type="number" scale="log" domain={domain} ticks={logTicks(domain)} allowDataOverflow name="predicted safety factor" fontSize={11} tickFormatter={(v: number) => String(v)} label={{ value: "predicted safety factor", position: "insideBottomRight", offset: -2, fontSize: 11, fill: "#5b5f66" }} />
                 <YAxis dataKey="row" type="number" domain={[0.5, 3.5]} ticks={[1, 2, 3]} tickFormatter={(v: number) => ["", "broke", "worn", "held"][v] ?? ""} fontSize={11} width={48} />
                 <Tooltip formatter={(v) => (typeof v === "number" && v > 3.5 ? v.toFixed(2) : v)} labelFormatter={() => ""} />
                 <Legend wrapperStyle={{ fontSize: 11 }} />
