@@ -83,7 +83,7 @@ describe("applying a calibration", () => {
     expect(p.derateAfter).toBe(calibratedDerate(0.8, c.factor!));
     expect(p.derateAfter).toBe(0.6155); // 0.8 / √(1.55 · 1.09) = 0.8 / 1.29981 = 0.61547
     expect(p.applicable).toBe(true);
-    expect(p.source).toBe("calibrated from 3 test runs (2026-06-01): lowest safety factor that held 1.55, highest that broke 1.09; factor 0.770 on the derate 0.8");
+    expect(p.source).toBe("calibrated from 3 test runs (2026-06-01): lowest safety factor that held 1.55, highest that broke 1.09; factor 0.769 on the derate 0.8");
   });
 
   it("cannot raise a figure through a derate above 1, and says why", () => {
