@@ -291,9 +291,15 @@ export function ViewFrame({ id, title, axes, box, handles = [], children, notes 
         ) : null}
         {notes ? <div className="pointer-events-none absolute bottom-1.5 right-2 max-w-[70%] text-right text-xs">{notes}</div> : null}
         {picking || moving ? (
-          <p role="status" data-testid={`underlay-hint-${id}`} className="pointer-events-none absolute left-2 top-1.5 rounded bg-white/90 px-1.5 py-0.5 text-xs text-ink shadow">
-            {picking ? (picking.points.length === 0 ? "Click the first of two points a known distance apart on the picture (Esc to stop)" : "Click the second point") : "Drag the picture to move it (Esc or Done moving to stop)"}
-          </p>
+          <div className="absolute left-2 top-1.5 flex items-center gap-2 rounded bg-white/90 px-1.5 py-0.5 text-xs text-ink shadow">
+            <p role="status" data-testid={`underlay-hint-${id}`}>
+              {picking ? (picking.points.length === 0 ? "Click the first of two points a known distance apart on the picture" : "Click the second point") : "Drag the picture to move it"}
+            </p>
+            {/* Its press must not reach the view, where it would pick a point or start a move. */}
+            <button type="button" className="rounded border border-ink/20 px-1.5 hover:bg-ink/5" onPointerDown={(e) => e.stopPropagation()} onClick={() => underlays?.setMode({ kind: "idle" })}>
+              {picking ? "Stop" : "Done"}
+            </button>
+          </div>
         ) : null}
         <p className="sr-only" aria-live="polite">{announce}</p>
       </div>

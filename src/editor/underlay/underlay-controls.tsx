@@ -115,8 +115,15 @@ export function UnderlayControls({ view, box }: { view: UnderlayView; box: Plane
               </label>
               {u.canWrite ? (
                 <div className="flex flex-wrap gap-1.5">
-                  <Button variant="secondary" className="px-2 py-1 text-xs" aria-pressed={!!picking} onClick={() => u.setMode(picking ? { kind: "idle" } : { kind: "pick", view, points: [] })}>{picking ? "Stop picking" : "Scale by two points"}</Button>
-                  <Button variant="secondary" className="px-2 py-1 text-xs" aria-pressed={moving} onClick={() => u.setMode(moving ? { kind: "idle" } : { kind: "move", view })}>{moving ? "Done moving" : "Move"}</Button>
+                  <Button variant="secondary" className="px-2 py-1 text-xs" aria-pressed={!!picking} onClick={() => {
+                    u.setMode(picking ? { kind: "idle" } : { kind: "pick", view, points: [] });
+                    // Out of the way of the picture: the points are picked on the view.
+                    setOpen(false);
+                  }}>{picking ? "Stop picking" : "Scale by two points"}</Button>
+                  <Button variant="secondary" className="px-2 py-1 text-xs" aria-pressed={moving} onClick={() => {
+                    u.setMode(moving ? { kind: "idle" } : { kind: "move", view });
+                    setOpen(false);
+                  }}>{moving ? "Done moving" : "Move"}</Button>
                   <Button variant="ghost" className="px-2 py-1 text-xs text-red-800" onClick={() => void u.remove(view)}>Remove</Button>
                 </div>
               ) : (
