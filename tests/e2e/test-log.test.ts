@@ -183,7 +183,9 @@ describe("an underlay under the front view", () => {
     await page.getByTestId("underlay-visible-front").uncheck();
     await expect.poll(async () => (await apiAs<{ underlays: Underlay[] }>(owner, `/api/workspaces/${ws}/kits/${kitId}/underlays`)).underlays[0]?.visible, POLL).toBe(false);
     await page.getByTestId("underlay-visible-front").check();
-    await shot(page, "underlay");
     await expectAccessible(page, { name: "underlay-panel" });
+    await page.getByTestId("underlay-button-front").click();
+    await page.getByTestId("underlay-panel-front").waitFor({ state: "hidden" });
+    await shot(page, "underlay");
   });
 });
