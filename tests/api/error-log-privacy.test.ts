@@ -31,9 +31,12 @@ describe("a 500's log line carries the route, the error and an id, not the user'
   it("kits POST whose insert fails: 500 internal with an errorId; the line has neither name, notes, e-mail nor query string", async () => {
     const name = "Kit of Hedda Lorne";
     const notes = "ring hedda.lorne@test.example about the knuckle";
-    vi.spyOn(db, "insert").mockImplementation(() => {
+    // A kit and its first revision are inserted in one transaction: the insert fails inside it.
+    const failing = () => {
       throw failedQuery(["0b5c…", ws, name, notes], name);
-    });
+    };
+    vi.spyOn(db, "insert").mockImplementation(failing);
+    vi.spyOn(db, "transaction").mockImplementation(async (run) => run({ insert: failing } as unknown as Parameters<typeof run>[0]));
     const logged = vi.spyOn(console, "error").mockImplementation(() => {});
     const res = await call<P>(kitsRoute.POST, "POST", `/api/workspaces/${ws}/kits?by=hedda.lorne%40test.example`, { workspaceId: ws }, { cookie: owner.cookie, body: { name, scale: "1:10", notes } });
     expect(res.status).toBe(500);

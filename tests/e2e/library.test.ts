@@ -177,6 +177,8 @@ describe("revisions in the editor", () => {
     await expectAccessible(page, { name: "editor-revision-read-only" });
 
     await page.getByTestId("revision-banner").getByRole("button", { name: "Restore as the latest" }).click();
+    await page.getByTestId("restore-dialog").getByText(/Every revision stays in the history/).waitFor();
+    await expectAccessible(page, { name: "editor-restore-dialog" });
     await page.getByTestId("restore-dialog").getByRole("button", { name: "Restore as the latest" }).click();
     await page.waitForURL((url) => url.pathname.endsWith(kit.id) && !url.search);
     await page.getByTestId("kit-revision").getByText("revision 3").waitFor();
@@ -187,6 +189,8 @@ describe("revisions in the editor", () => {
 
     await page.getByTestId("tab-history").click();
     await page.getByTestId("history").locator("[data-revision='2']").getByRole("button", { name: "Make a variant" }).click();
+    await page.getByLabel("Name of the new kit").waitFor();
+    await expectAccessible(page, { name: "editor-variant-dialog" });
     await page.getByLabel("Name of the new kit").fill("Moorcroft corner, thin");
     await page.getByTestId("variant-dialog").getByRole("button", { name: "Make the variant" }).click();
     await page.waitForURL((url) => !url.pathname.endsWith(kit.id));
@@ -231,6 +235,8 @@ describe("the shelf and the targets", () => {
     await page.getByTestId("shelf-material").getByText("Moorcroft bar stock").waitFor();
     await expectAccessible(page, { name: "shelf" });
     await page.getByRole("button", { name: "Change Moorcroft bar stock" }).click();
+    await page.getByLabel("Tensile yield (MPa)").waitFor();
+    await expectAccessible(page, { name: "shelf-change-form" });
     await page.getByLabel("Tensile yield (MPa)").fill("600");
     await page.getByRole("button", { name: "Save the change" }).click();
     const confirm = page.getByTestId("shelf-confirm-dialog");
@@ -248,6 +254,8 @@ describe("the shelf and the targets", () => {
   it("the targets page refuses a bad figure, then saves", async () => {
     const page = await pageAs(browser, owner);
     await page.goto(`/workspaces/${ws}/targets`);
+    await page.getByLabel("Least steer lock (°)").waitFor();
+    await expectAccessible(page, { name: "targets" });
     await page.getByLabel("Least steer lock (°)").fill("lots");
     await page.getByRole("button", { name: "Save targets" }).click();
     await page.locator("#target-minLockDeg-error").waitFor();
