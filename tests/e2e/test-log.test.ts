@@ -16,7 +16,7 @@ import { formatSafetyFactor, type TestRun } from "@/contracts/test-log";
 import type { Underlay } from "@/contracts/underlays";
 import { expectAccessible } from "./helpers/a11y";
 import { apiAs, pageAs, signInByApi, signUpByApi, type Account } from "./helpers/accounts";
-import { setUpBrowser } from "./helpers/browser";
+import { baseUrl, setUpBrowser } from "./helpers/browser";
 
 const browser = setUpBrowser();
 const root = fileURLToPath(new URL("../..", import.meta.url));
@@ -105,6 +105,26 @@ describe("the test log on a kit", () => {
     await page.locator("[data-run='1']").waitFor();
     const runs = (await apiAs<{ runs: TestRun[] }>(owner, `/api/workspaces/${ws}/kits/${kitId}/test-runs`)).runs;
     expect(runs.map((r) => r.photos.length)).toEqual([0]);
+  });
+});
+
+describe("uploads through the running app", () => {
+  it("an oversized photo is refused with 413 and a clear message, and nothing is stored", async () => {
+    const kitId = await newKit("Pennick 10 big file");
+    const materialId = (await apiAs<{ items: { id: string; kind: string }[] }>(owner, `/api/workspaces/${ws}/shelf`)).items.find((i) => i.kind === "material")!.id;
+    const body = { revision: 1, testedOn: "2026-02-02", part: "dogbone", materialId, setup: { motor: { kind: "torque", torqueNm: 0.5 }, gearRatios: [6], lockDeg: null, load: "" }, outcome: "held" };
+    const { run } = await apiAs<{ run: TestRun }>(owner, `/api/workspaces/${ws}/kits/${kitId}/test-runs`, { method: "POST", body });
+    // 12 MB: past the 10 MB limit (and past the 10 MB Next buffers for its proxy, which API routes never pass through).
+    const big = Buffer.concat([await picture(64, 48, { r: 1, g: 2, b: 3 }), Buffer.alloc(12_000_000)]);
+    const res = await fetch(`${baseUrl}/api/workspaces/${ws}/kits/${kitId}/test-runs/${run.id}/photos`, {
+      method: "POST",
+      headers: { cookie: owner.cookies.map((c) => `${c.name}=${c.value}`).join("; "), origin: baseUrl, "content-type": "application/octet-stream", "x-file-name": "huge.png" },
+      body: big,
+    });
+    expect(res.status).toBe(413);
+    expect(((await res.json()) as { error: { code: string; message: string } }).error).toMatchObject({ code: "file_too_large", message: expect.stringContaining("10 MB") });
+    const after = (await apiAs<{ runs: TestRun[] }>(owner, `/api/workspaces/${ws}/kits/${kitId}/test-runs`)).runs;
+    expect(after[0]!.photos).toEqual([]);
   });
 });
 
