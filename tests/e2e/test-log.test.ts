@@ -88,6 +88,12 @@ describe("the test log on a kit", () => {
     await expect.poll(() => img.evaluate((el: HTMLImageElement) => el.complete && el.naturalWidth), POLL).toBe(320);
     await shot(page, "run-logged");
     await expectAccessible(page, { name: "test-log-filled" });
+    // Deleting asks first (and says the photo goes too); cancelled, nothing changes.
+    await card.getByRole("button", { name: "Delete" }).click();
+    await page.getByTestId("delete-run-dialog").getByText("The run and its photo are removed for everyone.").waitFor();
+    await expectAccessible(page, { name: "delete-run-dialog" });
+    await page.getByTestId("delete-run-dialog").getByRole("button", { name: "Cancel" }).click();
+    expect((await apiAs<{ runs: TestRun[] }>(owner, `/api/workspaces/${ws}/kits/${kitId}/test-runs`)).runs).toHaveLength(1);
   });
 
   it("logs the run but refuses a photo that is not an image, saying why", async () => {
@@ -166,6 +172,24 @@ describe("calibration", () => {
     await expectAccessible(page, { name: "calibration" });
     await section.getByText(/The \d+ runs/).click();
     await expectAccessible(page, { name: "calibration-runs-table" });
+
+    // Applying to the club's steel first lists the kits it rewrites; cancelled, the shelf is unchanged.
+    const steel = page.locator(`section[data-material="Club 4140 bar, batch HF-0412"]`);
+    await steel.getByRole("button", { name: "Apply to the shelf material" }).click();
+    const confirm = page.getByTestId("calibration-confirm");
+    await confirm.getByText(/each gets a new revision with the derate/).waitFor();
+    expect(await confirm.getByRole("listitem").count()).toBeGreaterThanOrEqual(2);
+    await expectAccessible(page, { name: "calibration-confirm" });
+    await confirm.getByRole("button", { name: "Cancel" }).click();
+    const again = (await apiAs<{ materials: MaterialCalibration[] }>(ines, `/api/workspaces/${demo}/calibration`)).materials;
+    expect(again.find((m) => m.material.name === "Club 4140 bar, batch HF-0412")!.material.derate).toBe(1);
+
+    // A viewer sees the same page with nothing to apply.
+    const priya = await signInByApi("priya@harrowflats.example", "bench-demo-2026");
+    const viewerPage = await pageAs(browser, priya, { width: 1400, height: 1000 });
+    await viewerPage.goto(`/workspaces/${demo}/calibration`);
+    await viewerPage.getByTestId("calibration-plot").first().waitFor();
+    expect(await viewerPage.getByRole("button", { name: "Apply to the shelf material" }).count()).toBe(0);
   });
 });
 
