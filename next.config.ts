@@ -2,8 +2,8 @@ import type { NextConfig } from "next";
 
 const nextConfig: NextConfig = {
   poweredByHeader: false,
-  // pg and the Neon driver are plain Node modules: keep them out of the server bundle.
-  serverExternalPackages: ["pg", "@neondatabase/serverless"],
+  // pg, the Neon driver and pdfkit (which reads its own data files) are plain Node modules: keep them out of the server bundle.
+  serverExternalPackages: ["pg", "@neondatabase/serverless", "pdfkit"],
 };
 
 export default nextConfig;

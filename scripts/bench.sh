@@ -2,7 +2,8 @@
 # `npm run bench`: performance checks.
 #  1. the engine benchmark (scripts/bench-engine.ts), in-process, no services;
 #  2. the HTTP benchmark (scripts/bench-http.ts),
-#  3. the library benchmark (scripts/bench-library.ts: a page of 50 of 5,000 kits sorted by a readout) and
+#  3. the library benchmark (scripts/bench-library.ts: a page of 50 of 5,000 kits sorted by a readout),
+#     the export benchmark (scripts/bench-exports.ts: the demo kit's sheet and a 121 × 121 envelope CSV) and
 #  4. the browser benchmark (scripts/bench-browser.ts: the editor drag, the kit page), all against one
 #     production server on 127.0.0.1:3200 with its own throwaway database (.data/pg-bench on 54349) and
 #     object store (.data/s3-bench on 54402), stopped afterwards.
@@ -29,7 +30,7 @@ else
   kb_say "no scripts/bench-engine.ts yet: engine benchmark skipped"
 fi
 
-# --- HTTP, library and browser benchmarks -----------------------------------------------------------
+# --- HTTP, library, export and browser benchmarks ----------------------------------------------------
 # All read BENCH_BASE_URL (the server below); DATABASE_URL is its own database, migrated (each
 # benchmark makes the accounts and kits it needs: through the API, or for the library's 5,000 kits
 # straight into that database).
@@ -48,5 +49,7 @@ kb_say "HTTP benchmark against $BENCH_BASE_URL"
 npx --no-install tsx scripts/bench-http.ts
 kb_say "library benchmark against $BENCH_BASE_URL"
 npx --no-install tsx scripts/bench-library.ts
+kb_say "export benchmark against $BENCH_BASE_URL"
+npx --no-install tsx scripts/bench-exports.ts
 kb_say "browser benchmark against $BENCH_BASE_URL"
 npx --no-install tsx scripts/bench-browser.ts

@@ -26,6 +26,32 @@ export default defineConfig([
     },
   },
   {
+    // What a figure reads like and what the views draw: pure TypeScript the editor and the server share.
+    files: ["src/figures/**/*.ts", "src/drawing/**/*.ts"],
+    rules: {
+      "no-restricted-imports": ["error", { patterns: [
+        { group: ["react", "react-*", "next", "next/*", "konva", "drizzle-orm", "drizzle-orm/*", "pg", "server-only", "@/server/*", "@/app/*", "@/editor/*", "@/components/*", "@/lib/*"], message: "src/figures and src/drawing import only the engine, the contracts and each other (drawing may import figures, not the other way)." },
+      ] }],
+    },
+  },
+  {
+    files: ["src/figures/**/*.ts"],
+    rules: {
+      "no-restricted-imports": ["error", { patterns: [
+        { group: ["react", "react-*", "next", "next/*", "konva", "drizzle-orm", "drizzle-orm/*", "pg", "server-only", "@/server/*", "@/app/*", "@/editor/*", "@/components/*", "@/lib/*", "@/drawing/*"], message: "src/figures imports only the engine, the contracts and itself." },
+      ] }],
+    },
+  },
+  {
+    // The server renders exports from the shared drawing and figures, never from the editor's client code.
+    files: ["src/server/**/*.ts"],
+    rules: {
+      "no-restricted-imports": ["error", { patterns: [
+        { group: ["react", "react-*", "konva", "@/app/*", "@/editor/*", "@/components/*", "@/lib/*"], message: "src/server imports the engine, the contracts, src/drawing and src/figures; never the editor, components, lib or app." },
+      ] }],
+    },
+  },
+  {
     files: ["src/editor/**/*.{ts,tsx}", "src/components/**/*.{ts,tsx}", "src/lib/**/*.{ts,tsx}"],
     rules: {
       "no-restricted-imports": ["error", { patterns: [

@@ -1,8 +1,8 @@
 #!/usr/bin/env bash
 # `npm test`: every test, on a fresh machine, with nothing left running afterwards.
-# Installs what is missing, starts a throwaway PostgreSQL and object store, migrates, runs vitest (unit, component,
-# integration), builds and starts the app, runs the browser tests, stops everything, and ends with
-# the line `N passed, N failed` (CI reads that line) and a non-zero exit on any failure.
+# Installs what is missing (Chromium, poppler-utils), starts a throwaway PostgreSQL and object store, migrates,
+# runs vitest (unit, component, integration), builds and starts the app, runs the browser tests, stops
+# everything, and ends with the line `N passed, N failed` (CI reads that line) and a non-zero exit on any failure.
 #
 # TEST_DATABASE_URL, when set, replaces the throwaway PostgreSQL (DATABASE_URL is ignored here on
 # purpose: tests write to their database, and must not write to the one the demo or a user set up).
@@ -70,6 +70,15 @@ if [[ ! -x $CHROMIUM ]]; then
   fi
 fi
 export CHROMIUM_PATH=$CHROMIUM
+# The export tests read the dimension sheet back with poppler's pdftotext and render it with pdftoppm.
+if ! command -v pdftotext >/dev/null || ! command -v pdftoppm >/dev/null; then
+  if kb_is_root; then
+    kb_apt_install poppler-utils
+  else
+    kb_die "the export tests need poppler's pdftotext and pdftoppm, and they are missing.
+    Install them (Debian: sudo apt-get install poppler-utils) or run npm test as root to have it done."
+  fi
+fi
 
 # --- throwaway database and the test environment ----------------------------------------------
 PG_PORT=$(kb_free_port 54339) || kb_die "no free port for the test PostgreSQL (54339-54359)"

@@ -13,7 +13,8 @@ export default defineConfig({
     projects: [
       {
         resolve: { alias },
-        test: { name: "unit", environment: "node", include: ["tests/engine/**/*.test.ts", "tests/contracts/**/*.test.ts", "tests/lib/**/*.test.ts"] },
+        // Property tests run hundreds of analyses: room for a machine busy with other work.
+        test: { name: "unit", environment: "node", include: ["tests/engine/**/*.test.ts", "tests/contracts/**/*.test.ts", "tests/lib/**/*.test.ts", "tests/figures/**/*.test.ts", "tests/drawing/**/*.test.ts"], testTimeout: 30_000 },
       },
       {
         resolve: { alias },

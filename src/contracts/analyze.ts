@@ -4,6 +4,12 @@ import { z } from "zod";
 // 81 × 121 points is about four times the bench grid (41 × 61).
 export const ANALYZE_GRID_BUDGET_POINTS = 81 * 121;
 
+/**
+ * The grid the editor's figures come from once a drag ends (the API's default): the kit page's first
+ * figures and the exports use it too, so a sheet shows the numbers the editor shows.
+ */
+export const FULL_FIGURES_GRID = { travelSteps: 21, steerSteps: 41 } as const;
+
 export const analyzeGrid = z
   .strictObject({
     travelSteps: z.number({ error: "grid.travelSteps must be a number" }).int("grid.travelSteps must be a whole number").min(2, "grid.travelSteps must be at least 2").max(81, "grid.travelSteps must be at most 81"),

@@ -2,7 +2,7 @@ import { act, renderHook, waitFor } from "@testing-library/react";
 import { describe, expect, it } from "vitest";
 import { TARNWICK_10_BASE } from "@/contracts/demo-layouts";
 import { analyzeLayout, neckTradeoff, NECK_TRADEOFF_GRID } from "@/engine";
-import { setAt } from "@/editor/document/layout-paths";
+import { setAt } from "@/figures/layout-paths";
 import { createAnalysisClient, type AnalysisPort } from "@/editor/readouts/analysis-client";
 import { ANALYSIS_GRIDS, answerAnalysisRequest, type AnalysisReply, type AnalysisRequest } from "@/editor/readouts/analysis-protocol";
 import { useLiveAnalysis } from "@/editor/readouts/use-live-analysis";

@@ -3,9 +3,9 @@ import { TARNWICK_10_BASE } from "@/contracts/demo-layouts";
 import { layoutFieldsSchema } from "@/contracts/layout";
 import { moveHandle, nudgeHandle, setNeckDiameter } from "@/editor/commands/edit-commands";
 import { handleById, handlePlanePoint, HANDLES } from "@/editor/document/handles";
-import { ALL_FIELDS, fieldRange, layoutMessageInWords } from "@/editor/document/layout-fields";
+import { ALL_FIELDS, fieldRange, layoutMessageInWords } from "@/figures/layout-fields";
 import { layoutSchema } from "@/contracts/layout";
-import { getAt, setAt } from "@/editor/document/layout-paths";
+import { getAt, setAt } from "@/figures/layout-paths";
 
 describe("layout paths", () => {
   it("reads and writes a nested field without touching the rest", () => {

@@ -4,7 +4,7 @@ import { TARNWICK_10_BASE } from "@/contracts/demo-layouts";
 import { DEFAULT_TARGETS } from "@/contracts/targets";
 import { analyzeLayout } from "@/engine";
 import { judgeReadoutGroups } from "@/editor/library/readout-verdicts";
-import { readoutGroups } from "@/editor/readouts/readout-figures";
+import { readoutGroups } from "@/figures/readout-figures";
 
 const a = analyzeLayout(TARNWICK_10_BASE);
 const byId = (t = DEFAULT_TARGETS) => new Map(judgeReadoutGroups(readoutGroups(a, "mm"), a, t).flatMap((g) => g.readouts).map((r) => [r.id, r]));

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { gridStepLabel, GRID_STEPS_MM, nudgeDelta, snapToStep } from "@/editor/tools/snapping";
-import { formatLength, MM_PER_INCH, mmToUnit, unitToMm } from "@/editor/units/length-unit";
+import { formatLength, MM_PER_INCH, mmToUnit, unitToMm } from "@/figures/length-unit";
 
 describe("snapping", () => {
   it("snaps to the nearest multiple of the step", () => {

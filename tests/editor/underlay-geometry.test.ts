@@ -4,7 +4,7 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { imageToPlane, initialPlacement, movedPlacement, placeByPicks, planeToImage, type UnderlayPlacement } from "@/contracts/underlays";
 import { pictureAttrs, pictureToScreen, screenToPicture } from "@/editor/underlay/underlay-geometry";
-import type { ViewTransform } from "@/editor/canvas/view-transform";
+import type { ViewTransform } from "@/drawing/view-transform";
 
 const base: UnderlayPlacement = { anchorPx: { x: 100, y: 50 }, anchorMm: { u: 10, v: 20 }, mmPerPx: 0.5, rotationDeg: 0, picks: null };
 

@@ -32,6 +32,17 @@ export async function call<P>(handler: Handler<P>, method: string, path: string,
   return { status: res.status, json: json as any, headers: res.headers };
 }
 
+/** A GET of a file: the answer's bytes as they are (a PDF is not text), and as text for the rest. */
+export async function download<P>(handler: Handler<P>, path: string, params: P, cookie?: string) {
+  const res = await handler(new Request(`${BASE}${path}`, { headers: cookie ? { cookie } : {} }), { params: Promise.resolve(params) });
+  const bytes = Buffer.from(await res.arrayBuffer());
+  const text = bytes.toString("utf8");
+  let json: unknown = null;
+  if ((res.headers.get("content-type") ?? "").startsWith("application/json")) json = JSON.parse(text);
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any
+  return { status: res.status, headers: res.headers, bytes, text, json: json as any };
+}
+
 function cookieFrom(res: Response): string {
   const set = res.headers.getSetCookie();
   return set.map((c) => c.split(";")[0]).join("; ");

@@ -39,7 +39,9 @@ export function useDatabaseUrl(url: string, extra: Record<string, string> = {}):
   const global = globalThis as { knucklebenchDb?: { $client?: { end(): Promise<void> } } };
   delete global.knucklebenchDb;
   return async () => {
-    await global.knucklebenchDb?.$client?.end().catch(() => {});
+    // A client still held by a request cut off mid-outage would keep end() waiting: give it a few seconds.
+    const ended = global.knucklebenchDb?.$client?.end().catch(() => {});
+    await Promise.race([ended, new Promise((r) => setTimeout(r, 5_000).unref())]);
     delete global.knucklebenchDb;
     for (const n of names) {
       if (saved[n] === undefined) delete process.env[n];

@@ -52,7 +52,7 @@ beforeAll(async () => {
 afterAll(async () => {
   await restore?.(); // ends the pool before the cluster goes
   await database?.remove();
-});
+}, 180_000);
 
 beforeEach(() => {
   uncaught.length = 0;

@@ -1,7 +1,7 @@
 // A readout judged against its target: the figure, a mark that does not rely on colour alone (✓ meets,
 // ✗ misses), and the target in words for screen readers and on hover.
 import { READOUT_LABELS, judgeReadout, targetText, type ReadoutKey, type Targets, type Verdict } from "@/contracts/targets";
-import { fmt } from "@/lib/format";
+import { fmt } from "@/figures/format";
 
 export const VERDICT_TONE: Record<Verdict, string> = { meets: "text-emerald-800", misses: "text-red-700", none: "text-ink" };
 

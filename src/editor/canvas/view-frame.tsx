@@ -15,11 +15,11 @@ import { nudgeDelta } from "../tools/snapping";
 import { useUnderlays } from "../underlay/underlay-context";
 import { UnderlayControls } from "../underlay/underlay-controls";
 import { pictureAttrs, pictureToScreen, screenToPicture } from "../underlay/underlay-geometry";
-import { formatLength } from "../units/length-unit";
-import { INK } from "./drawing-colours";
-import { GridShape } from "./plane-shapes";
+import { formatLength } from "@/figures/length-unit";
+import { INK } from "@/drawing/drawing-colours";
+import { GridShape } from "./grid-shape";
 import { useElementSize } from "./use-element-size";
-import { fitBox, panBy, planeToScreen, scaleBarMm, screenToPlane, zoomAt, type PlaneBox, type PlanePoint, type ScreenPoint, type ViewTransform } from "./view-transform";
+import { fitBox, panBy, planeToScreen, scaleBarMm, screenToPlane, zoomAt, type PlaneBox, type PlanePoint, type ScreenPoint, type ViewTransform } from "@/drawing/view-transform";
 
 const HIT_RADIUS_PX = 10;
 

@@ -1,8 +1,8 @@
 // Edits of the layout document as pure functions: each takes the layout and returns the next one. The
 // store applies them (one undo step each); tools, the panel and the plots only ever call these.
 import type { Layout } from "@/contracts/layout";
-import { fieldRange } from "../document/layout-fields";
-import { getAt, setAt } from "../document/layout-paths";
+import { fieldRange } from "@/figures/layout-fields";
+import { getAt, setAt } from "@/figures/layout-paths";
 import { handleById, handlePlanePoint, withHandleAt } from "../document/handles";
 
 function clampToField(path: string, v: number): number {

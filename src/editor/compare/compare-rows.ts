@@ -4,10 +4,10 @@
 import type { ComparedItem } from "@/contracts/compare";
 import { compareReadout, judgeReadout, type Change, type ReadoutKey, type Verdict } from "@/contracts/targets";
 import { MATERIALS, type AnalysisResult } from "@/engine";
-import { fmt, limitLabel, signed } from "@/lib/format";
-import { FIELD_GROUPS, type FieldDef } from "../document/layout-fields";
-import { getAt } from "../document/layout-paths";
-import { formatLength, lengthDigits, mmToUnit, type LengthUnit } from "../units/length-unit";
+import { fmt, limitLabel, signed } from "@/figures/format";
+import { FIELD_GROUPS, type FieldDef } from "@/figures/layout-fields";
+import { getAt } from "@/figures/layout-paths";
+import { formatLength, lengthDigits, mmToUnit, type LengthUnit } from "@/figures/length-unit";
 
 export interface CompareCell {
   readonly text: string;

@@ -6,7 +6,7 @@ import type { AnalysisResult } from "@/engine";
 import { ackermannPlotRows } from "../plots/ackermann-plot";
 import { PlotCard, PlotEmpty } from "../plots/plot-card";
 import { chartLength, chartValue, lengthAxisUnit } from "../plots/plot-data";
-import type { LengthUnit } from "../units/length-unit";
+import type { LengthUnit } from "@/figures/length-unit";
 import { ITEM_STYLES, itemLetter } from "./overlay-view";
 
 type Point = { x: number | null; y: number | null };

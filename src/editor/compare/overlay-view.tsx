@@ -5,9 +5,9 @@ import { useId, useMemo } from "react";
 import type { ComparedItem } from "@/contracts/compare";
 import type { Layout } from "@/contracts/layout";
 import { cornerPoseAt, cornerPoser, GeometryError, type CornerPose } from "@/engine";
-import { frontBox, frontDrawing, topBox, topDrawing } from "../canvas/corner-drawing";
-import { INK } from "../canvas/drawing-colours";
-import { boxOf, fitBox, planeToScreen, type PlaneBox, type PlanePoint, type ViewTransform } from "../canvas/view-transform";
+import { frontBox, frontDrawing, topBox, topDrawing } from "@/drawing/corner-drawing";
+import { INK } from "@/drawing/drawing-colours";
+import { boxOf, fitBox, planeToScreen, type PlaneBox, type PlanePoint, type ViewTransform } from "@/drawing/view-transform";
 
 /** One style per compared item: colour (each ≥ 4.5:1 on white, as it is also legend text) and dash. */
 export const ITEM_STYLES = [

@@ -3,7 +3,7 @@
 //   front view (seen from ahead):  u = y (left, outboard on the left corner), v = z (up)
 //   top view (seen from above, drawn in line with the front view): u = y, v = −x (forward is down)
 import type { Layout } from "@/contracts/layout";
-import { getAt, setAt, type LayoutPath } from "./layout-paths";
+import { getAt, setAt, type LayoutPath } from "@/figures/layout-paths";
 
 export type ViewId = "front" | "top";
 

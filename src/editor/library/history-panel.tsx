@@ -14,7 +14,7 @@ import { compareHref } from "@/contracts/compare";
 import type { KitDetail } from "@/contracts/kits";
 import { REVISION_KIND_LABELS, readoutsOf, type RevisionRow } from "@/contracts/revisions";
 import { api } from "@/lib/api-client";
-import { limitLabel } from "@/lib/format";
+import { limitLabel } from "@/figures/format";
 import { queryKeys } from "@/lib/query-keys";
 import { loadKitIntoEditor } from "../save/save-actions";
 import { selectDirty } from "../store/editor-store";

@@ -3,7 +3,7 @@
 import { summarizeAnalysis } from "@/contracts/revisions";
 import { judgeReadout, targetText, type ReadoutKey, type Targets } from "@/contracts/targets";
 import type { AnalysisResult } from "@/engine";
-import type { ReadoutGroup } from "../readouts/readout-figures";
+import type { ReadoutGroup } from "@/figures/readout-figures";
 
 /** Which live readout shows which judged figure. */
 export const JUDGED_READOUTS: Readonly<Record<string, ReadoutKey>> = {

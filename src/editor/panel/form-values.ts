@@ -3,10 +3,10 @@
 // so showing a figure rounded (or in inches) never changes it.
 import type { Layout } from "@/contracts/layout";
 import { layoutFieldsSchema } from "@/contracts/layout";
-import { ALL_FIELDS, fieldRange, type FieldDef } from "../document/layout-fields";
-import { getAt, setAt } from "../document/layout-paths";
+import { ALL_FIELDS, fieldRange, type FieldDef } from "@/figures/layout-fields";
+import { getAt, setAt } from "@/figures/layout-paths";
 import { roundMm } from "../commands/edit-commands";
-import { lengthUnitLabel, mmToUnit, unitToMm, type LengthUnit } from "../units/length-unit";
+import { lengthUnitLabel, mmToUnit, unitToMm, type LengthUnit } from "@/figures/length-unit";
 
 export type FormValues = Record<string, string | boolean>;
 export type FormErrors = Record<string, string>;

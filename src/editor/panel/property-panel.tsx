@@ -6,9 +6,9 @@ import { useEffect, useMemo, useRef } from "react";
 import { useForm, type FieldErrors, type Resolver } from "react-hook-form";
 import type { Layout } from "@/contracts/layout";
 import { setField } from "../commands/edit-commands";
-import { FIELD_GROUPS, type FieldDef } from "../document/layout-fields";
+import { FIELD_GROUPS, type FieldDef } from "@/figures/layout-fields";
 import { useEditor, useEditorStore } from "../store/editor-context";
-import { lengthUnitLabel, type LengthUnit } from "../units/length-unit";
+import { lengthUnitLabel, type LengthUnit } from "@/figures/length-unit";
 import { fieldApplies, fieldRangeText, formKey, formToLayout, gearKey, GEAR_RATIOS, layoutToForm, MAX_GEAR_RATIOS, type FormValues } from "./form-values";
 
 // The drive group first: the neck, the cup and the joint are what a designer changes most.

@@ -5,7 +5,7 @@ import { scaleLinear, scaleSequential } from "d3-scale";
 import { interpolateViridis } from "d3-scale-chromatic";
 import { useId, useMemo, useState } from "react";
 import type { AnalysisResult } from "@/engine";
-import { mmToUnit, type LengthUnit } from "../units/length-unit";
+import { mmToUnit, type LengthUnit } from "@/figures/length-unit";
 import { envelopeCells, limitContour, lockLines, type EnvelopeCell, type MapPoint } from "./envelope-map-geometry";
 import { PlotCard, PlotEmpty } from "./plot-card";
 import { figureText, lengthAxisUnit, SERIES } from "./plot-data";

@@ -5,7 +5,7 @@
 import { useRef, useState, type KeyboardEvent } from "react";
 import { CartesianGrid, Legend, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import type { NeckTradeoff, NeckTradeoffSample } from "@/engine";
-import { formatLength, type LengthUnit } from "../units/length-unit";
+import { formatLength, type LengthUnit } from "@/figures/length-unit";
 import { PlotCard, PlotEmpty } from "./plot-card";
 import { chartLength, chartValue, figureText, lengthAxisUnit, SERIES } from "./plot-data";
 

@@ -1,7 +1,7 @@
 // Small helpers the plots share: numbers made safe for a chart (never NaN on screen) and the
 // contrast-checked colours of their series.
-import type { LengthUnit } from "../units/length-unit";
-import { lengthUnitLabel, mmToUnit } from "../units/length-unit";
+import type { LengthUnit } from "@/figures/length-unit";
+import { lengthUnitLabel, mmToUnit } from "@/figures/length-unit";
 
 /**
  * Series colours. Each is also legend text, so each reaches 4.5:1 on white (WCAG AA): steel 7.2:1,

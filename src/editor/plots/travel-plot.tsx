@@ -2,7 +2,7 @@
 // Camber and roll-centre height against wheel travel (analysis.travel, rack centred).
 import { CartesianGrid, Legend, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import type { AnalysisResult } from "@/engine";
-import type { LengthUnit } from "../units/length-unit";
+import type { LengthUnit } from "@/figures/length-unit";
 import { PlotCard, PlotEmpty } from "./plot-card";
 import { chartLength, chartValue, lengthAxisUnit, SERIES } from "./plot-data";
 

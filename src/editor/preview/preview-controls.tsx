@@ -4,7 +4,7 @@
 import { useEffect, useId, useRef } from "react";
 import { Button } from "@/components/ui/button";
 import { useEditor, useEditorStore } from "../store/editor-context";
-import { formatLength } from "../units/length-unit";
+import { formatLength } from "@/figures/length-unit";
 import { sweepAt } from "./sweep-path";
 
 function Slider({ label, value, min, max, step, text, onChange, testId }: {

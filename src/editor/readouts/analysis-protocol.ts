@@ -1,6 +1,7 @@
 // The messages between the editor and its analysis worker, and the worker's answer to one request. The
 // answer is computed by the same engine and contract as the API (parse, upgrade, analyse), so the
 // browser's figures are the server's.
+import { FULL_FIGURES_GRID } from "@/contracts/analyze";
 import { layoutFieldsSchema, layoutSchema, parseLayout } from "@/contracts/layout";
 import { analyzeLayout, GeometryError, neckTradeoff, type AnalysisResult, type NeckTradeoff } from "@/engine";
 import type { LayoutFault } from "../store/editor-store";
@@ -11,7 +12,7 @@ export type AnalysisQuality = "coarse" | "full";
 /** Grids: coarse keeps up with the pointer while dragging; full (the API's default) runs on release. */
 export const ANALYSIS_GRIDS: Record<AnalysisQuality, { travelSteps: number; steerSteps: number }> = {
   coarse: { travelSteps: 9, steerSteps: 15 },
-  full: { travelSteps: 21, steerSteps: 41 },
+  full: FULL_FIGURES_GRID,
 };
 
 export interface AnalysisRequest {

@@ -2,7 +2,7 @@
 // (a range or a check between fields) or from the engine's GeometryError part name.
 import type { LayoutIssue } from "@/contracts/layout";
 import type { PartId } from "../document/handles";
-import { layoutMessageInWords } from "../document/layout-fields";
+import { layoutMessageInWords } from "@/figures/layout-fields";
 import { HANDLES } from "../document/handles";
 import type { LayoutFault } from "../store/editor-store";
 

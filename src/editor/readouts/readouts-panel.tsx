@@ -4,7 +4,7 @@
 import { useKitTargets } from "../library/library-context";
 import { judgeReadoutGroups } from "../library/readout-verdicts";
 import { useEditor } from "../store/editor-context";
-import { readoutGroups, zeroLockNote } from "./readout-figures";
+import { readoutGroups, zeroLockNote } from "@/figures/readout-figures";
 
 export function ReadoutsPanel() {
   const live = useEditor((s) => s.live);

@@ -4,13 +4,14 @@
 //   selection, preview (steer and travel shown), settings (grid, units, what is drawn)
 //   live       the figures of the latest analysis the worker returned, and what is wrong with the layout
 //   save       the state of the last save
+import type { SceneShow } from "@/drawing/scene";
 import { temporal } from "zundo";
 import { createStore, type StoreApi } from "zustand/vanilla";
 import type { Layout } from "@/contracts/layout";
 import type { AnalysisResult, NeckTradeoff } from "@/engine";
 import type { PartId } from "../document/handles";
 import { DEFAULT_GRID_STEP_MM } from "../tools/snapping";
-import type { LengthUnit } from "../units/length-unit";
+import type { LengthUnit } from "@/figures/length-unit";
 
 export interface KitRef {
   readonly workspaceId: string;
@@ -53,13 +54,8 @@ export interface LiveAnalysis {
   readonly seq: number;
 }
 
-export interface ShowOptions {
-  readonly kingpinAxis: boolean;
-  readonly instantCentre: boolean;
-  readonly rollCentre: boolean;
-  readonly ackermann: boolean;
-  readonly dimensions: boolean;
-}
+/** What the views draw besides the parts (the scenes' own choices, src/drawing/scene.ts). */
+export type ShowOptions = SceneShow;
 
 export interface EditorSettings {
   readonly gridStepMm: number;

@@ -1,13 +1,14 @@
 "use client";
 // The editor's top bar: what is open and whether it is saved, undo and redo, the grid step and the unit,
-// what the views draw, and Save. Viewers see the same bar without any control that writes.
+// what the views draw, the exports, and Save. Viewers see the same bar without any control that writes.
 import { useId } from "react";
 import { Button } from "@/components/ui/button";
 import { api } from "@/lib/api-client";
+import { ExportMenu } from "../exports/export-menu";
 import { selectDirty, selectFaulty, redo, undo, type ShowOptions } from "../store/editor-store";
 import { useEditor, useEditorStore, useHistoryDepth } from "../store/editor-context";
 import { GRID_STEPS_MM } from "../tools/snapping";
-import { formatLength, isLengthUnit, type LengthUnit } from "../units/length-unit";
+import { formatLength, isLengthUnit, type LengthUnit } from "@/figures/length-unit";
 
 // How tooltips name the shortcuts' modifier: one text for every platform, so server and browser render alike.
 const SHORTCUT_MOD = "Ctrl/⌘";
@@ -99,6 +100,7 @@ export function EditorToolbar({ onSave }: { onSave: () => void }) {
           ))}
         </fieldset>
       </details>
+      <ExportMenu />
       {readOnly ? null : (
         <div className="flex items-center">
           <label htmlFor={noteId} className="sr-only">Note for the revision this save makes (optional)</label>

@@ -5,7 +5,7 @@ import type { Layout } from "@/contracts/layout";
 import { moveHandle } from "../commands/edit-commands";
 import { handleById, handlePlanePoint } from "../document/handles";
 import type { EditorStore } from "../store/editor-store";
-import type { PlanePoint, ScreenPoint } from "../canvas/view-transform";
+import type { PlanePoint, ScreenPoint } from "@/drawing/view-transform";
 import { snapToStep } from "./snapping";
 
 /** Screen distance a press must travel before it becomes a drag, px. */

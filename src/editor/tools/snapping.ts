@@ -1,5 +1,5 @@
 // Grid snapping and keyboard nudges, in mm. The grid step is the user's (set in their unit, kept in mm).
-import { MM_PER_INCH, type LengthUnit } from "../units/length-unit";
+import { MM_PER_INCH, type LengthUnit } from "@/figures/length-unit";
 import { roundMm } from "../commands/edit-commands";
 
 /** Grid steps offered in each unit, in mm: metric steps, and binary fractions of an inch. */

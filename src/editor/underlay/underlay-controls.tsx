@@ -8,7 +8,7 @@ import { ModalDialog } from "@/components/ui/modal-dialog";
 import { ACCEPTED_IMAGE_TYPES, formatBytes } from "@/contracts/attachments";
 import { imageToPlane, placeByPicks, UNDERLAY_VIEW_LABELS, type ImagePt, type UnderlayView } from "@/contracts/underlays";
 import { UPLOAD_LIMIT_BYTES } from "../test-log/run-form";
-import type { PlaneBox } from "../canvas/view-transform";
+import type { PlaneBox } from "@/drawing/view-transform";
 import { useUnderlays } from "./underlay-context";
 import { VIEW_AXES } from "./underlay-geometry";
 

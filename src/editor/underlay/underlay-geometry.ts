@@ -1,7 +1,7 @@
 // Where an underlay's picture lands on a view's canvas: the placement (picture px → plane mm, see
 // contracts/underlays) composed with the view's transform (plane mm → screen px).
 import { imageToPlane, planeToImage, type ImagePt, type UnderlayPlacement } from "@/contracts/underlays";
-import { planeToScreen, screenToPlane, type ScreenPoint, type ViewTransform } from "../canvas/view-transform";
+import { planeToScreen, screenToPlane, type ScreenPoint, type ViewTransform } from "@/drawing/view-transform";
 
 /** Konva Image attributes: its top-left at (x, y), turned clockwise by `rotation` degrees, scaled uniformly. */
 export interface PictureAttrs {

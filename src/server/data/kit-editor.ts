@@ -1,4 +1,5 @@
 import "server-only";
+import { FULL_FIGURES_GRID } from "@/contracts/analyze";
 import { parseLayout, type Layout } from "@/contracts/layout";
 import type { KitDetail } from "@/contracts/kits";
 import { roleCan } from "@/contracts/roles";
@@ -34,8 +35,6 @@ export type KitEditorData =
     }
   | { readonly ok: false; readonly kit: Omit<KitDetail, "layout">; readonly message: string };
 
-// The full grid, as the browser's worker runs on release, so the first figures are the same ones.
-const FULL_GRID = { travelSteps: 21, steerSteps: 41 };
 
 /** The kit's head, or with `revision` one earlier revision (always read-only). */
 export async function loadKitEditor(access: WorkspaceAccess, rawKitId: string, revision: number | null = null): Promise<KitEditorData> {
@@ -64,7 +63,7 @@ export async function loadKitEditor(access: WorkspaceAccess, rawKitId: string, r
 /** The analysis to render with the page; null when it cannot be made now (the browser then computes it). */
 async function serverFigures(layout: Layout): Promise<AnalysisResult | null> {
   try {
-    const outcome = await runAnalysis({ layout, grid: FULL_GRID });
+    const outcome = await runAnalysis({ layout, grid: FULL_FIGURES_GRID });
     return outcome.ok ? (JSON.parse(outcome.json) as { analysis: AnalysisResult }).analysis : null;
   } catch {
     return null; // a busy pool must not cost the page: the editor's worker makes the figures instead

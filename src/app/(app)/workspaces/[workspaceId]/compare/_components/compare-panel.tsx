@@ -9,7 +9,7 @@ import type { Change } from "@/contracts/targets";
 import { inputRows, outputRows, type CompareCell, type CompareRow } from "@/editor/compare/compare-rows";
 import { OverlayPlots } from "@/editor/compare/overlay-plots";
 import { ITEM_STYLES, itemLetter, OverlayView, type OverlaySteer } from "@/editor/compare/overlay-view";
-import type { LengthUnit } from "@/editor/units/length-unit";
+import type { LengthUnit } from "@/figures/length-unit";
 import { CopyLinkButton } from "./copy-link-button";
 
 const CHANGE_WORDS: Record<Exclude<Change, "same">, { mark: string; word: string; tone: string }> = {

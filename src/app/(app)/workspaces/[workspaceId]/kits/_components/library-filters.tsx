@@ -6,7 +6,7 @@ import { useEffect, useId, useState } from "react";
 import { KIT_SCALES } from "@/contracts/kits";
 import { LOCK_LIMITS, type LibraryFacets } from "@/contracts/library";
 import { READOUT_KEYS, READOUT_LABELS, type ReadoutKey } from "@/contracts/targets";
-import { limitLabel } from "@/lib/format";
+import { limitLabel } from "@/figures/format";
 import type { LibraryView } from "@/lib/library-url";
 
 const control = "rounded-md border border-ink/20 bg-white px-2 py-1 text-sm focus:border-steel focus:outline-none focus:ring-2 focus:ring-steel/30";

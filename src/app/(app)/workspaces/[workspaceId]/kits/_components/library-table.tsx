@@ -22,7 +22,7 @@ import type { KitSummary } from "@/contracts/kits";
 import type { LibrarySort } from "@/contracts/library";
 import { COMPARE_MAX } from "@/contracts/compare";
 import { effectiveTargets, READOUT_KEYS, type ReadoutKey, type Targets } from "@/contracts/targets";
-import { limitLabel } from "@/lib/format";
+import { limitLabel } from "@/figures/format";
 import { LIBRARY_COLUMNS, type LibraryColumn } from "@/lib/library-url";
 import { KitRowActions } from "./kit-row-actions";
 

@@ -20,7 +20,7 @@ import {
   type ShelfKitUse,
 } from "@/contracts/shelf";
 import { api, ApiError } from "@/lib/api-client";
-import { fmt } from "@/lib/format";
+import { fmt } from "@/figures/format";
 import { queryKeys } from "@/lib/query-keys";
 import { ShelfItemForm, type ShelfFormResult } from "./shelf-item-form";
 

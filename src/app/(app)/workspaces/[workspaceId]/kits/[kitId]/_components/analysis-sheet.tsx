@@ -1,6 +1,7 @@
 "use client";
 import type { AnalysisResult } from "@/engine";
-import { fmt, limitLabel, signed } from "@/lib/format";
+import { CAUTIONS } from "@/figures/cautions";
+import { fmt, limitLabel, signed } from "@/figures/format";
 import { JointAngleChart, SteerLockChart, TravelChart } from "./kit-charts";
 
 function Figure({ label, value, hint, tone }: { label: string; value: string; hint?: string; tone?: "good" | "bad" }) {
@@ -31,7 +32,7 @@ export function AnalysisSheet({ analysis, stale }: { analysis: AnalysisResult | 
       {analysis ? <AnalysisView a={analysis} /> : <p className="text-sm text-ink-muted">No figures yet: the layout has not been analysed.</p>}
       <aside className="rounded-lg border border-amber-300 bg-amber-50 p-3 text-sm text-amber-950">
         <p className="font-semibold">Cautions</p>
-        <p>Strength figures are estimates: printed parts vary with layer direction, infill, temperature and moisture. A drivetrain spun up on the bench can throw fragments: guard it and wear eye protection. This is a design aid for models, not a sign-off for full-size or road vehicles.</p>
+        <p>{CAUTIONS.join(" ")}</p>
       </aside>
     </div>
   );

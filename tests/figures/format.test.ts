@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { fmt, limitLabel, signed } from "@/lib/format";
+import { fmt, limitLabel, signed } from "@/figures/format";
 
 describe("readout formatting", () => {
   it("never shows NaN or Infinity", () => {

@@ -1,8 +1,8 @@
 // The live readouts as label, figure and hint, from one analysis: the figures a designer watches while
 // dragging. Pure (tested without a page); a missing figure is a dash, never NaN.
 import type { AnalysisResult } from "@/engine";
-import { fmt, limitLabel, signed } from "@/lib/format";
-import { formatLength, type LengthUnit } from "../units/length-unit";
+import { fmt, limitLabel, signed } from "./format";
+import { formatLength, type LengthUnit } from "./length-unit";
 
 export interface Readout {
   readonly id: string;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { boxOf, fitBox, gridSpacingMm, planeToScreen, scaleBarMm, screenToPlane, zoomAt } from "@/editor/canvas/view-transform";
+import { boxOf, fitBox, gridSpacingMm, planeToScreen, scaleBarMm, screenToPlane, zoomAt } from "@/drawing/view-transform";
 
 describe("view transform", () => {
   const t = { scale: 4, ox: 100, oy: 300 };

@@ -32,3 +32,8 @@ export const CLEARANCE_LABEL: Record<ClearanceState, string> = {
 };
 
 export const CANVAS_FONT = "system-ui, -apple-system, 'Segoe UI', sans-serif";
+
+/** The part's colour, or the fault colour when a fault names this part. */
+export function partColour(faultPart: string | null, part: string, normal: string): string {
+  return faultPart === part ? INK.fault : normal;
+}
