@@ -5,10 +5,8 @@
 #  3. the library benchmark (scripts/bench-library.ts: a page of 50 of 5,000 kits sorted by a readout),
 #     the export benchmark (scripts/bench-exports.ts: the demo kit's sheet and a 121 × 121 envelope CSV) and
 #  4. the browser benchmark (scripts/bench-browser.ts: the editor drag, the kit page), all against one
-#     production server on 127.0.0.1:3200 with its own throwaway database (.data/pg-bench on 54349),
-#     stopped afterwards.
-# KB_BENCH_BUILD=reuse serves the existing .next build instead of building (the interrupt test of
-# `npm test` stops a bench run).
+#     production server on 127.0.0.1:3200 with its own throwaway database (.data/pg-bench on 54349) and
+#     object store (.data/s3-bench on 54402), stopped afterwards.
 set -euo pipefail
 
 # shellcheck source=scripts/lib/runner.sh
@@ -17,6 +15,7 @@ source "$(dirname "$0")/lib/runner.sh"
 # shellcheck disable=SC2317 # runs from the trap
 cleanup() {
   kb_app_stop
+  kb_s3_stop
   kb_pg_stop
 }
 kb_stop_on_exit cleanup
@@ -40,6 +39,9 @@ PG_PORT=$(kb_free_port 54349) || kb_die "no free port for the bench PostgreSQL (
 kb_env_bench "$APP_PORT"
 unset DATABASE_URL # never benchmark against the user's database
 kb_pg_start pg-bench "$PG_PORT" fresh
+S3_PORT=$(kb_free_port 54402) || kb_die "no free port for the bench object store (54402-54422)"
+unset KB_S3_ENDPOINT # nor against the user's object store
+kb_s3_start s3-bench "$S3_PORT" fresh
 npx --no-install tsx scripts/migrate.ts
 kb_next_build_or_reuse "${KB_BENCH_BUILD:-}" || kb_die "the build failed"
 kb_app_start "$APP_PORT" .data/app-bench.log || kb_die "the app did not start (log: .data/app-bench.log)"

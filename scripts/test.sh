@@ -1,11 +1,12 @@
 #!/usr/bin/env bash
 # `npm test`: every test, on a fresh machine, with nothing left running afterwards.
-# Installs what is missing (Chromium, poppler-utils), starts a throwaway PostgreSQL, migrates, runs
-# vitest (unit, component, integration), builds and starts the app, runs the browser tests, stops
+# Installs what is missing (Chromium, poppler-utils), starts a throwaway PostgreSQL and object store, migrates,
+# runs vitest (unit, component, integration), builds and starts the app, runs the browser tests, stops
 # everything, and ends with the line `N passed, N failed` (CI reads that line) and a non-zero exit on any failure.
 #
 # TEST_DATABASE_URL, when set, replaces the throwaway PostgreSQL (DATABASE_URL is ignored here on
 # purpose: tests write to their database, and must not write to the one the demo or a user set up).
+# TEST_S3_ENDPOINT (with the other KB_S3_* settings) likewise replaces the throwaway object store.
 # KB_TEST_FILES="a.test.ts b.test.ts" runs only those vitest files, with the same setup, and stops before
 # the build: a short run (the interrupt test stops one), with its own cluster and reports beside a full one.
 #
@@ -33,6 +34,7 @@ STARTED=$SECONDS
 
 cleanup() {
   kb_app_stop
+  kb_s3_stop
   kb_pg_stop
 }
 summarize() { # extra summarizer arguments
@@ -81,6 +83,7 @@ fi
 # --- throwaway database and the test environment ----------------------------------------------
 PG_PORT=$(kb_free_port 54339) || kb_die "no free port for the test PostgreSQL (54339-54359)"
 APP_PORT=$(kb_free_port 3100) || kb_die "no free port for the test app (3100-3120)"
+S3_PORT=$(kb_free_port 54381) || kb_die "no free port for the test object store (54381-54401)"
 kb_env_test "$APP_PORT"
 if [[ -n ${TEST_DATABASE_URL:-} ]]; then
   export DATABASE_URL=$TEST_DATABASE_URL
@@ -88,6 +91,14 @@ if [[ -n ${TEST_DATABASE_URL:-} ]]; then
 else
   unset DATABASE_URL
   kb_pg_start "pg-$RUN_NAME" "$PG_PORT" fresh
+fi
+# The tests write files too: a throwaway object store beside the database (TEST_S3_ENDPOINT names another).
+if [[ -n ${TEST_S3_ENDPOINT:-} ]]; then
+  export KB_S3_ENDPOINT=$TEST_S3_ENDPOINT
+  kb_say "using the object store at TEST_S3_ENDPOINT"
+else
+  unset KB_S3_ENDPOINT
+  kb_s3_start "s3-$RUN_NAME" "$S3_PORT" fresh
 fi
 
 MIGRATED=1

@@ -4,6 +4,9 @@
 
 kb_env_common() {
   export NEXT_TELEMETRY_DISABLED=1
+  # The pinned AWS SDK runs on Node 20; its notice that later releases will need Node 22 is for whoever
+  # upgrades it (DEVELOPERS.md says so), not a line for every process that loads it.
+  export AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED=true
 }
 
 # Demo: the user's own values win; the auth secret is generated once and kept in .data.

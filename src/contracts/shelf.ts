@@ -42,7 +42,8 @@ export const materialSpecSchema = z
   })
   .superRefine((m, ctx) => {
     if (m.printed && m.derateSource === "") ctx.addIssue({ code: "custom", path: ["derateSource"], message: "spec.derateSource is required for a printed material" });
-    if (!m.printed && m.derate !== 1) ctx.addIssue({ code: "custom", path: ["derate"], message: "spec.derate applies to printed parts only: 1 for a metal" });
+    // A metal takes its yield as it is, unless a derate with its source says otherwise (a calibration from test runs).
+    if (!m.printed && m.derate !== 1 && m.derateSource === "") ctx.addIssue({ code: "custom", path: ["derate"], message: "spec.derate below 1 on a metal needs its source in spec.derateSource (e.g. a calibration from test runs); else 1" });
   });
 export type MaterialSpec = z.infer<typeof materialSpecSchema>;
 
@@ -128,15 +129,17 @@ type ItemFigures = Pick<ShelfItem, "id" | "kind" | "name" | "spec">;
 const MAX_SOURCE = 500;
 const clip = (t: string) => (t.length <= MAX_SOURCE ? t : `${t.slice(0, MAX_SOURCE - 1)}…`);
 
-function materialOf(item: ItemFigures & { spec: MaterialSpec }): Layout["strength"]["material"] {
+/** The layout's material for a shelf material: its figures, with the sources of the yield and of any derate. */
+export function layoutMaterialOf(item: Pick<ShelfItem, "name"> & { spec: MaterialSpec }): Layout["strength"]["material"] {
   const m = item.spec;
+  const derated = m.printed || m.derate !== 1;
   return {
     kind: "custom",
     name: item.name.slice(0, 120),
     yieldMpa: m.tensileYieldMpa,
-    source: clip(m.printed ? `${m.yieldSource}; derate: ${m.derateSource}` : m.yieldSource),
+    source: clip(derated ? `${m.yieldSource}; derate: ${m.derateSource}` : m.yieldSource),
     printed: m.printed,
-    derate: m.printed ? m.derate : 1,
+    derate: derated ? m.derate : 1,
     shearRule: m.shearRule,
   };
 }
@@ -150,7 +153,7 @@ export function applyShelfItem(layout: Layout, item: ItemFigures, materials: rea
   const shelf = { ...layout.shelf };
   if (item.kind === "material") {
     shelf.material = item.id;
-    return { ...layout, strength: { ...layout.strength, material: materialOf(item as ItemFigures & { spec: MaterialSpec }) }, shelf };
+    return { ...layout, strength: { ...layout.strength, material: layoutMaterialOf(item as ItemFigures & { spec: MaterialSpec }) }, shelf };
   }
   if (item.kind === "joint") {
     const j = item.spec as JointSpec;
@@ -169,7 +172,7 @@ export function applyShelfItem(layout: Layout, item: ItemFigures, materials: rea
 
 /** Whether the layout's figures are still the item's (false once the designer changed one by hand). */
 export function layoutMatchesShelfItem(layout: Layout, item: ItemFigures): boolean {
-  if (item.kind === "material") return JSON.stringify(layout.strength.material) === JSON.stringify(materialOf(item as ItemFigures & { spec: MaterialSpec }));
+  if (item.kind === "material") return JSON.stringify(layout.strength.material) === JSON.stringify(layoutMaterialOf(item as ItemFigures & { spec: MaterialSpec }));
   if (item.kind === "joint") {
     const j = item.spec as JointSpec;
     return layout.drive.jointType === j.jointType && layout.drive.ratedAngleDeg === j.ratedAngleDeg;

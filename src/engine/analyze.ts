@@ -44,7 +44,8 @@ function checkedSteps(value: number | undefined, key: keyof typeof ANALYZE_LIMIT
   return n;
 }
 
-function materialFigure(m: KitMaterial): MaterialFigure {
+/** The engine's figure for a layout's material: a catalogue entry by id, or the designer's own figures. */
+export function materialFigure(m: KitMaterial): MaterialFigure {
   if (m.kind === "catalogue") return materialById(m.id);
   // The designer's own source, as entered: not a citation of ours.
   const source = { note: `as entered by the designer: ${m.source}`, cites: [] };

@@ -2,7 +2,8 @@
  * The engine's one import path. Pure TypeScript geometry for the left front corner of a small car
  * (ISO 8855 axes, mm and degrees); the right corner mirrors it.
  */
-export { analyzeLayout, ANALYZE_LIMITS, type AnalyzeOptions } from "./analyze";
+export { analyzeLayout, ANALYZE_LIMITS, materialFigure, type AnalyzeOptions } from "./analyze";
+export { allowableShear, analyzeStrength, calibrateAllowable, type Calibration, type CalibrationRun, type CalibrationStatus, type StrengthResult, type TestOutcome } from "./strength/index";
 export type * from "./analysis-result";
 export type * from "./kit-layout";
 export type * from "./geometry-types";

@@ -26,14 +26,31 @@ const envSchema = z.object({
   // address, replacing any copy a client sent. Unset (e.g. plain `next start`), no peer address is known.
   KB_SOCKET_ADDRESS_HEADER: z.string().regex(/^[a-z0-9-]{1,64}$/, "must be a lower-case header name").optional(),
   KB_MAX_BODY_BYTES: z.coerce.number().int().min(1024).max(10_000_000).default(262_144),
+  // Object storage for uploaded files (test-run photos, underlays), reached through the AWS S3 SDK: any
+  // S3-compatible provider. Unset endpoint = the provider's own (AWS S3 by region); keys unset = the SDK's
+  // default chain (AWS_* variables, an instance role). Path-style addressing for providers and local
+  // servers that do not serve bucket subdomains.
+  KB_S3_ENDPOINT: z.string().url().optional(),
+  KB_S3_REGION: z.string().min(1).default("us-east-1"),
+  KB_S3_BUCKET: z.string().regex(/^[a-z0-9][a-z0-9.-]{1,61}[a-z0-9]$/, "must be an S3 bucket name").default("knucklebench"),
+  KB_S3_ACCESS_KEY_ID: z.string().min(1).optional(),
+  KB_S3_SECRET_ACCESS_KEY: z.string().min(1).optional(),
+  KB_S3_FORCE_PATH_STYLE: z.enum(["true", "false"]).default("false").transform((v) => v === "true"),
+  // Largest file one upload may carry (bytes); larger ones are answered 413 before anything is stored.
+  KB_MAX_UPLOAD_BYTES: z.coerce.number().int().min(1024).max(100_000_000).default(10_485_760),
 });
 
 export type Env = z.infer<typeof envSchema>;
 
-const checkedEnvSchema = envSchema.refine((e) => !(e.KB_TRUST_PROXY_HOPS > 0 && e.KB_TRUSTED_PROXIES.trim()), {
-  message: "set KB_TRUST_PROXY_HOPS or KB_TRUSTED_PROXIES, not both",
-  path: ["KB_TRUSTED_PROXIES"],
-});
+const checkedEnvSchema = envSchema
+  .refine((e) => !(e.KB_TRUST_PROXY_HOPS > 0 && e.KB_TRUSTED_PROXIES.trim()), {
+    message: "set KB_TRUST_PROXY_HOPS or KB_TRUSTED_PROXIES, not both",
+    path: ["KB_TRUSTED_PROXIES"],
+  })
+  .refine((e) => !e.KB_S3_ACCESS_KEY_ID === !e.KB_S3_SECRET_ACCESS_KEY, {
+    message: "set both KB_S3_ACCESS_KEY_ID and KB_S3_SECRET_ACCESS_KEY, or neither",
+    path: ["KB_S3_SECRET_ACCESS_KEY"],
+  });
 
 function readEnv(): Env {
   const parsed = checkedEnvSchema.safeParse(process.env);

@@ -1,22 +1,24 @@
 // `npm run demo` in a terminal, stopped the ways a person stops it: Ctrl-C (which reaches npm and the demo
 // script at once), Ctrl-C pressed again while it stops, SIGTERM to its process group, the terminal closed.
-// Each time the app and then PostgreSQL must stop before the prompt returns, and a kit written in the first
-// run must still be there in the next. A demo of its own beside any other (ports, cluster), serving the
+// Each time the app, the object store and then PostgreSQL must stop before the prompt returns, and a kit and a
+// file written in the first run must still be there in the next. A demo of its own beside any other (ports, cluster), serving the
 // build `npm test` made (KB_DEMO_BUILD=reuse).
 import { rmSync } from "node:fs";
 import { join } from "node:path";
 import { afterAll, afterEach, beforeAll, describe, expect, it } from "vitest";
 import { freePort } from "../helpers/ports";
-import { endLeftovers, expectNothingLeft, snapshot, type Started } from "./helpers/stopping";
+import { endLeftovers, expectNothingLeft, objectStoreOn, snapshot, type Started } from "./helpers/stopping";
 import { openTerminal, repoRoot, type Terminal } from "./helpers/terminal";
 
 const CLUSTER = "pg-interrupt-demo";
+const STORE = "s3-interrupt-demo";
 const KIT_NAME = `Interrupt check ${Date.now()}`;
 const START_MS = 180_000;
 const STOP_MS = 90_000;
 
 let appPort: number;
 let pgPort: number;
+let s3Port: number;
 let term: Terminal | undefined;
 let started: Started | undefined;
 const dataDirs = new Set<string>();
@@ -24,18 +26,21 @@ const dataDirs = new Set<string>();
 beforeAll(async () => {
   appPort = await freePort();
   pgPort = await freePort();
+  s3Port = await freePort();
   rmSync(join(repoRoot, ".data", CLUSTER), { recursive: true, force: true });
+  for (const f of [STORE, `${STORE}.keys`]) rmSync(join(repoRoot, ".data", f), { recursive: true, force: true });
 });
 
 // Only does anything when a test failed half-way.
 afterEach(async () => {
-  await endLeftovers(term, pgPort, started);
+  await endLeftovers(term, pgPort, started, s3Port);
   term = started = undefined;
 });
 
 afterAll(() => {
   for (const dir of dataDirs) rmSync(dir, { recursive: true, force: true });
   rmSync(join(repoRoot, ".data", `${CLUSTER}.password`), { force: true });
+  for (const f of [STORE, `${STORE}.keys`, `${STORE}.log`]) rmSync(join(repoRoot, ".data", f), { recursive: true, force: true });
 });
 
 const base = () => `http://127.0.0.1:${appPort}`;
@@ -45,13 +50,16 @@ async function startDemo(): Promise<{ term: Terminal; started: Started }> {
     KB_DEMO_PORT: String(appPort),
     KB_DEMO_PG_PORT: String(pgPort),
     KB_DEMO_PG_NAME: CLUSTER,
+    KB_DEMO_S3_PORT: String(s3Port),
+    KB_DEMO_S3_NAME: STORE,
     KB_DEMO_BUILD: "reuse",
   });
-  await term.waitFor(/Press Ctrl-C to stop the app and the database/, START_MS);
+  await term.waitFor(/Press Ctrl-C to stop the app, the object store and the database/, START_MS);
   const health = await fetch(`${base()}/api/health`);
   expect(health.status).toBe(200);
   started = snapshot(term, pgPort);
   expect(started.processes.some((p) => p.args.includes("scripts/serve.mjs")), "the app runs under the terminal").toBe(true);
+  expect(objectStoreOn(s3Port, started.processes).length, "the object store runs under the terminal").toBe(1);
   dataDirs.add(started.pgDataDir);
   return { term, started };
 }
@@ -81,6 +89,21 @@ async function kitNames(output: string): Promise<string[]> {
   return ((await res.json()) as { kits: { name: string }[] }).kits.map((k) => k.name);
 }
 
+// A small PNG (1 × 1, one grey pixel) put under the check kit's top view in the first run.
+const PIXEL_PNG = Buffer.from("iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAAAAAA6fptVAAAACklEQVR4nGNoAAAAggCBd81ytgAAAABJRU5ErkJggg==", "base64");
+
+/** The bytes of the file under the check kit's top view, as a member downloads them. */
+async function underlayBytes(output: string): Promise<Buffer> {
+  const { cookie, workspaceId } = await signInAsPrinted(output);
+  const list = (await (await fetch(`${base()}/api/workspaces/${workspaceId}/kits`, { headers: { cookie } })).json()) as { kits: { id: string; name: string }[] };
+  const kit = list.kits.find((k) => k.name === KIT_NAME)!;
+  const underlays = (await (await fetch(`${base()}/api/workspaces/${workspaceId}/kits/${kit.id}/underlays`, { headers: { cookie } })).json()) as { underlays: { file: { url: string } }[] };
+  expect(underlays.underlays).toHaveLength(1);
+  const file = await fetch(`${base()}${underlays.underlays[0]!.file.url}`, { headers: { cookie } });
+  expect(file.status).toBe(200);
+  return Buffer.from(await file.arrayBuffer());
+}
+
 describe("npm run demo stops the app and then the database", () => {
   it("on Ctrl-C, keeping what was written", async () => {
     const { term, started } = await startDemo();
@@ -91,16 +114,24 @@ describe("npm run demo stops the app and then the database", () => {
       body: JSON.stringify({ name: KIT_NAME, scale: "1:10" }),
     });
     expect(created.status).toBe(201);
+    const kitId = ((await created.json()) as { kit: { id: string } }).kit.id;
+    const put = await fetch(`${base()}/api/workspaces/${workspaceId}/kits/${kitId}/underlays/top`, {
+      method: "PUT",
+      headers: { "content-type": "application/octet-stream", "x-file-name": "pixel.png", origin: base(), cookie },
+      body: PIXEL_PNG,
+    });
+    expect(put.status).toBe(201);
 
     term.interrupt();
     expect(await term.exited(STOP_MS)).toBe(0); // stopping on Ctrl-C is how the demo ends
-    await expectNothingLeft(started, [appPort, pgPort]);
-    expect(term.output()).toMatch(/stopping the app[\s\S]*stopping PostgreSQL/);
+    await expectNothingLeft(started, [appPort, s3Port, pgPort]);
+    expect(term.output()).toMatch(/stopping the app[\s\S]*stopping the object store[\s\S]*stopping PostgreSQL/);
   });
 
-  it("on Ctrl-C pressed again and again while it stops; the kit of the first run is still there", async () => {
+  it("on Ctrl-C pressed again and again while it stops; the kit and the file of the first run are still there", async () => {
     const { term, started } = await startDemo();
     expect(await kitNames(term.output())).toContain(KIT_NAME);
+    expect((await underlayBytes(term.output())).equals(PIXEL_PNG)).toBe(true);
 
     const from = term.output().length;
     term.interrupt();
@@ -109,7 +140,7 @@ describe("npm run demo stops the app and then the database", () => {
     await term.waitFor(/stopping PostgreSQL/, STOP_MS, from);
     term.interrupt();
     expect(await term.exited(STOP_MS)).toBe(0);
-    await expectNothingLeft(started, [appPort, pgPort]);
+    await expectNothingLeft(started, [appPort, s3Port, pgPort]);
   });
 
   it("on SIGTERM to its process group", async () => {
@@ -118,8 +149,8 @@ describe("npm run demo stops the app and then the database", () => {
 
     term.signalForeground("SIGTERM");
     expect(await term.exited(STOP_MS)).toBe(0);
-    await expectNothingLeft(started, [appPort, pgPort]);
-    expect(term.output()).toMatch(/stopping the app[\s\S]*stopping PostgreSQL/);
+    await expectNothingLeft(started, [appPort, s3Port, pgPort]);
+    expect(term.output()).toMatch(/stopping the app[\s\S]*stopping the object store[\s\S]*stopping PostgreSQL/);
   });
 
   it("when its terminal is closed", async () => {
@@ -129,6 +160,6 @@ describe("npm run demo stops the app and then the database", () => {
     term.hangUp();
     await term.exited(STOP_MS);
     // No prompt comes back to wait for: the script stops on its own, within the time a stop takes.
-    await expectNothingLeft(started, [appPort, pgPort], 30_000);
+    await expectNothingLeft(started, [appPort, s3Port, pgPort], 30_000);
   });
 });

@@ -37,6 +37,7 @@ export function WorkspaceSwitcher({ workspaces, activeWorkspaceId }: { workspace
         <nav className="flex gap-3 pl-2">
           <Link className="hover:underline" href={`/workspaces/${current}/kits`}>Kits</Link>
           <Link className="hover:underline" href={`/workspaces/${current}/shelf`}>Shelf</Link>
+          <Link className="hover:underline" href={`/workspaces/${current}/calibration`}>Calibration</Link>
           <Link className="hover:underline" href={`/workspaces/${current}/targets`}>Targets</Link>
           <Link className="hover:underline" href={`/workspaces/${current}/members`}>Members</Link>
         </nav>

@@ -4,20 +4,29 @@
 // Konva, whose layers do not listen) and handed to the drag tool; each handle also has a focusable
 // button over it, so Tab moves between handles and the arrow keys nudge the one focused.
 import { useEffect, useMemo, useRef, useState, type ReactNode } from "react";
-import { Circle, Layer, Stage } from "react-konva";
+import { Circle, Image as KonvaImage, Layer, Line, Stage } from "react-konva";
+import { movedPlacement, type UnderlayPlacement } from "@/contracts/underlays";
 import { nudgeHandle } from "../commands/edit-commands";
 import { handlePlanePoint, type HandleDef } from "../document/handles";
 import { selectShownLayout } from "../store/editor-store";
 import { useEditor, useEditorStore } from "../store/editor-context";
 import { createHandleDragTool, type PointerInput } from "../tools/handle-drag-tool";
 import { nudgeDelta } from "../tools/snapping";
+import { useUnderlays } from "../underlay/underlay-context";
+import { UnderlayControls } from "../underlay/underlay-controls";
+import { pictureAttrs, pictureToScreen, screenToPicture } from "../underlay/underlay-geometry";
 import { formatLength } from "@/figures/length-unit";
 import { INK } from "@/drawing/drawing-colours";
 import { GridShape } from "./grid-shape";
 import { useElementSize } from "./use-element-size";
-import { fitBox, panBy, planeToScreen, scaleBarMm, screenToPlane, zoomAt, type PlaneBox, type ScreenPoint, type ViewTransform } from "@/drawing/view-transform";
+import { fitBox, panBy, planeToScreen, scaleBarMm, screenToPlane, zoomAt, type PlaneBox, type PlanePoint, type ScreenPoint, type ViewTransform } from "@/drawing/view-transform";
 
 const HIT_RADIUS_PX = 10;
+
+/** The reference picture under the drawing, placed by its underlay's placement. */
+function UnderlayPicture({ image, attrs, opacity }: { image: HTMLImageElement; attrs: ReturnType<typeof pictureAttrs>; opacity: number }) {
+  return <KonvaImage listening={false} image={image} x={attrs.x} y={attrs.y} rotation={attrs.rotation} scaleX={attrs.scale} scaleY={attrs.scale} opacity={opacity} perfectDrawEnabled={false} />;
+}
 
 export interface ViewFrameProps {
   readonly id: string;
@@ -59,6 +68,14 @@ export function ViewFrame({ id, title, axes, box, handles = [], children, notes 
   const tool = useMemo(() => createHandleDragTool(store), [store]);
   const pan = useRef<{ from: ScreenPoint; start: ViewTransform } | null>(null);
   const [announce, setAnnounce] = useState("");
+  // The reference picture under this view (front and top only), and the gesture on it under way.
+  const underlays = useUnderlays();
+  const uView = id === "front" || id === "top" ? id : null;
+  const picture = uView && underlays ? underlays.of(uView) : null;
+  const uMode = underlays?.mode;
+  const picking = uMode?.kind === "pick" && uMode.view === uView ? uMode : null;
+  const moving = uMode?.kind === "move" && uMode.view === uView;
+  const moveDrag = useRef<{ from: PlanePoint; start: UnderlayPlacement; last: UnderlayPlacement } | null>(null);
 
   const fit = () => size.width > 0 && setUserT(fitBox(box, size.width, size.height, 28));
 
@@ -80,11 +97,15 @@ export function ViewFrame({ id, title, axes, box, handles = [], children, notes 
 
   useEffect(() => {
     const onKey = (e: KeyboardEvent) => {
-      if (e.key === "Escape" && tool.state().kind !== "idle") tool.cancel();
+      if (e.key !== "Escape") return;
+      if (tool.state().kind !== "idle") tool.cancel();
+      // Escape also ends picking points on, or moving, this view's underlay (not while a dialog is open).
+      const m = underlays?.mode;
+      if (m && m.kind !== "idle" && m.view === uView && !document.querySelector("dialog[open]")) underlays!.setMode({ kind: "idle" });
     };
     window.addEventListener("keydown", onKey);
     return () => window.removeEventListener("keydown", onKey);
-  }, [tool]);
+  }, [tool, underlays, uView]);
 
   const screenPoints = t ? handles.map((h) => ({ h, at: planeToScreen(t, handlePlanePoint(layout, h)) })) : [];
 
@@ -114,6 +135,17 @@ export function ViewFrame({ id, title, axes, box, handles = [], children, notes 
     if (!t || e.button !== 0) return;
     pressBox.current = containerRef.current!.getBoundingClientRect();
     const p = input(e, t);
+    if (picture && underlays && uView && picking) {
+      const at = screenToPicture(picture.placement, t, p.screen);
+      underlays.setMode({ kind: "pick", view: uView, points: [...picking.points, at].slice(-2) });
+      return;
+    }
+    if (picture && moving) {
+      containerRef.current!.setPointerCapture(e.pointerId);
+      moveDrag.current = { from: p.plane, start: picture.placement, last: picture.placement };
+      setCursor("grabbing");
+      return;
+    }
     const h = hit(p.screen);
     containerRef.current!.setPointerCapture(e.pointerId);
     if (h) {
@@ -127,6 +159,12 @@ export function ViewFrame({ id, title, axes, box, handles = [], children, notes 
   const onPointerMove = (e: React.PointerEvent) => {
     if (!t) return;
     const p = input(e, t);
+    if (moveDrag.current && uView && underlays) {
+      const m = moveDrag.current;
+      m.last = movedPlacement(m.start, p.plane[0] - m.from[0], p.plane[1] - m.from[1]);
+      underlays.preview(uView, m.last);
+      return;
+    }
     if (pan.current) {
       const { from, start } = pan.current;
       setT(panBy(start, p.screen[0] - from[0], p.screen[1] - from[1]));
@@ -138,6 +176,14 @@ export function ViewFrame({ id, title, axes, box, handles = [], children, notes 
     }
   };
   const end = (cancelled: boolean) => {
+    if (moveDrag.current && uView && underlays) {
+      const m = moveDrag.current;
+      moveDrag.current = null;
+      if (cancelled) underlays.preview(uView, m.start);
+      else if (m.last !== m.start) underlays.save(uView, m.last);
+      setCursor("move");
+      return;
+    }
     pan.current = null;
     pressBox.current = null;
     if (cancelled) tool.cancel();
@@ -172,6 +218,7 @@ export function ViewFrame({ id, title, axes, box, handles = [], children, notes 
         <h3 className="text-xs font-semibold uppercase tracking-wide text-ink/80">{title}</h3>
         <span className="text-xs text-ink-muted">{axes}</span>
         <span className="ml-auto flex gap-1">
+          {uView && underlays ? <UnderlayControls view={uView} box={box} /> : null}
           <button type="button" className="rounded px-1.5 text-xs text-ink/80 hover:bg-ink/5" aria-label={`Zoom in, ${title}`} onClick={() => t && setT(zoomAt(t, [size.width / 2, size.height / 2], 1.25))}>+</button>
           <button type="button" className="rounded px-1.5 text-xs text-ink/80 hover:bg-ink/5" aria-label={`Zoom out, ${title}`} onClick={() => t && setT(zoomAt(t, [size.width / 2, size.height / 2], 0.8))}>−</button>
           <button type="button" className="rounded px-1.5 text-xs text-ink/80 hover:bg-ink/5" onClick={fit}>Fit</button>
@@ -184,7 +231,7 @@ export function ViewFrame({ id, title, axes, box, handles = [], children, notes 
         data-ox={t ? t.ox.toFixed(2) : undefined}
         data-oy={t ? t.oy.toFixed(2) : undefined}
         className="relative min-h-0 flex-1 touch-none select-none"
-        style={{ cursor }}
+        style={{ cursor: picking ? "crosshair" : moving && cursor === "default" ? "move" : cursor }}
         onPointerDown={onPointerDown}
         onPointerMove={onPointerMove}
         onPointerUp={() => end(false)}
@@ -193,10 +240,17 @@ export function ViewFrame({ id, title, axes, box, handles = [], children, notes 
         {t && size.width > 0 ? (
           <Stage width={size.width} height={size.height} listening={false}>
             <Layer listening={false}>
+              {picture?.visible && picture.image ? <UnderlayPicture image={picture.image} attrs={pictureAttrs(picture.placement, t)} opacity={picture.opacity} /> : null}
               <GridShape t={t} width={size.width} height={size.height} stepMm={gridStepMm} />
               {children(t, size)}
             </Layer>
             <Layer listening={false}>
+              {picking && picture
+                ? picking.points.map((pt, i) => {
+                    const [x, y] = pictureToScreen(picture.placement, t, pt);
+                    return <Line key={i} listening={false} points={[x - 9, y, x + 9, y, x, y, x, y - 9, x, y + 9]} stroke={INK.fault} strokeWidth={2} />;
+                  })
+                : null}
               {screenPoints.map(({ h, at }) => {
                 const isSel = h.id === selected;
                 const isFault = h.id === faultHandle;
@@ -236,6 +290,17 @@ export function ViewFrame({ id, title, axes, box, handles = [], children, notes 
           </div>
         ) : null}
         {notes ? <div className="pointer-events-none absolute bottom-1.5 right-2 max-w-[70%] text-right text-xs">{notes}</div> : null}
+        {picking || moving ? (
+          <div className="absolute left-2 top-1.5 flex items-center gap-2 rounded bg-white/90 px-1.5 py-0.5 text-xs text-ink shadow">
+            <p role="status" data-testid={`underlay-hint-${id}`}>
+              {picking ? (picking.points.length === 0 ? "Click the first of two points a known distance apart on the picture" : "Click the second point") : "Drag the picture to move it"}
+            </p>
+            {/* Its press must not reach the view, where it would pick a point or start a move. */}
+            <button type="button" className="rounded border border-ink/20 px-1.5 hover:bg-ink/5" onPointerDown={(e) => e.stopPropagation()} onClick={() => underlays?.setMode({ kind: "idle" })}>
+              {picking ? "Stop" : "Done"}
+            </button>
+          </div>
+        ) : null}
         <p className="sr-only" aria-live="polite">{announce}</p>
       </div>
     </section>

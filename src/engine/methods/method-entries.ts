@@ -363,6 +363,17 @@ export const METHOD_ENTRIES: readonly MethodEntry[] = [
     cites: ["shigley-mde-9e", "common-practice"],
   },
   {
+    key: "calibration",
+    title: "Calibrating a material from test runs",
+    explain: "The factor on a material's allowable shear that puts the failure line between the logged runs that held and those that broke.",
+    definition: "Each logged run has the safety factor n the engine predicted with the material's present figure, and what happened: held, worn or broke. Scaling the allowable by k scales every prediction by k, so the runs agree with k when every held run predicts at least 1 and every broken run less than 1. That is possible only when the highest broken prediction is below the lowest held one; the factor given is then the geometric middle of the two, an equal ratio of margin to either run (our choice, not a published rule). Worn runs are shown but bound nothing. A factor below 1 derates the material; the factor is only as good as the runs are like the use to come.",
+    formula: "k = 1 / √(n_held,min · n_broke,max), valid for 1/n_held,min ≤ k < 1/n_broke,max",
+    unit: "—",
+    sign: "> 0; below 1 derates the material",
+    range: "only when n_broke,max < n_held,min; otherwise none",
+    cites: ["shigley-mde-9e", "derived-here"],
+  },
+  {
     key: "result-document",
     title: "The result document",
     explain: "Grid size, version and the warnings of one analysis.",

@@ -28,6 +28,7 @@ import { motorTorqueNm, overallRatio, shaftTorqueNmm, type MotorTorqueSource } f
 import { minimumNeckDiameterMm, torsionalShearStressMpa, twistAngleDeg } from "./torsion";
 
 export * from "./allowable";
+export * from "./calibration";
 export * from "./cross-pin";
 export * from "./materials";
 export * from "./torque-chain";

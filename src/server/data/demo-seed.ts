@@ -9,6 +9,7 @@ import { kitRevisions, kits, members, shelfItems, users, workspaces } from "../d
 import { DEMO_KITS, DEMO_SHELF, DEMO_TARGETS, type DemoKit } from "./demo-kits";
 import { createKit, saveKitLayout, updateKit } from "./kits";
 import { createVariant } from "./revisions";
+import { seedDemoTestLog, seedDemoUnderlay } from "./demo-test-log";
 import { listShelf } from "./shelf";
 import { getTargets, putTargets } from "./targets";
 
@@ -123,5 +124,8 @@ export async function seedDemo(): Promise<{ workspaceId: string; created: number
     made.set(kit.key, await seedKit(ws.id, kit, authors, shelf, made));
     created += 1;
   }
+  // The test log (runs with photos) and a drawing under the baseline's front view: files in object storage.
+  await seedDemoTestLog(ws.id, authors);
+  await seedDemoUnderlay(ws.id, authors.owner);
   return { workspaceId: ws.id, created };
 }

@@ -7,6 +7,7 @@ import { isJsonMediaType, unsupportedMediaType } from "./body";
 import { isDataStoreUnavailable } from "../db/unavailable";
 import { dataStoreUnavailable, errorResponse, HttpError } from "./errors";
 import { describeError } from "./error-log";
+import { isUploadMediaType, UPLOAD_MEDIA_TYPE } from "./upload";
 
 type RouteContext<P> = { params: Promise<P> };
 
@@ -41,7 +42,7 @@ const TRUSTED_ORIGINS = new Set(trustedOrigins().map((o) => URL.canParse(o) ? ne
  * cookie and no Origin is refused too, as better-auth refuses it; a write with neither cookie nor Origin
  * (a script) carries no ambient authority to forge and goes on to the session check, which answers 401.
  */
-function checkWriteRequest(req: Request): void {
+function checkWriteRequest(req: Request, body: BodyKind): void {
   if (SAFE_METHODS.has(req.method)) return;
   const origin = req.headers.get("origin");
   if (origin === null ? req.headers.has("cookie") : !TRUSTED_ORIGINS.has(origin)) {
@@ -50,14 +51,22 @@ function checkWriteRequest(req: Request): void {
       : "Requests that change data are accepted only from this app's own pages.");
   }
   const type = req.headers.get("content-type");
+  if (body === "file") {
+    // Raw bytes as application/octet-stream: not a type a form or a no-cors fetch may send either.
+    if (!isUploadMediaType(type)) throw new HttpError(415, "unsupported_media_type", `Send the file's bytes as the body, with Content-Type: ${UPLOAD_MEDIA_TYPE}.`);
+    return;
+  }
   if (type !== null && !isJsonMediaType(type)) throw unsupportedMediaType();
 }
 
+/** What a write route's body is: JSON (every route but uploads) or a file's raw bytes. */
+type BodyKind = "json" | "file";
+
 /** The one place a handler's errors become JSON responses, after the write checks every route shares. */
-function handled<P>(run: (req: Request, params: P) => Promise<Response>) {
+function handled<P>(run: (req: Request, params: P) => Promise<Response>, body: BodyKind = "json") {
   return async (req: Request, ctx: RouteContext<P>): Promise<Response> => {
     try {
-      checkWriteRequest(req);
+      checkWriteRequest(req, body);
       return await run(req, await ctx.params);
     } catch (error) {
       return toErrorResponse(error, req);
@@ -66,7 +75,7 @@ function handled<P>(run: (req: Request, params: P) => Promise<Response>) {
 }
 
 /** A route open to anyone (schema documents, health). Still never answers a raw 500. */
-export const publicRoute = handled;
+export const publicRoute = <P>(run: (req: Request, params: P) => Promise<Response>) => handled(run);
 
 /** A route for any signed-in user. */
 export function sessionRoute<P>(handler: (req: Request, signed: Signed, params: P) => Promise<Response>) {
@@ -81,5 +90,17 @@ export function workspaceRoute<P extends { workspaceId: string }, R extends Reso
 ) {
   return handled<P>(async (req, params) =>
     handler(req, await requireWorkspaceAccess(req.headers, params.workspaceId, resource, action), params),
+  );
+}
+
+/** An upload under /api/workspaces/[workspaceId]/…: the same checks, with the file's raw bytes as the body. */
+export function workspaceUploadRoute<P extends { workspaceId: string }, R extends Resource>(
+  resource: R,
+  action: Action<R>,
+  handler: (req: Request, access: WorkspaceAccess, params: P) => Promise<Response>,
+) {
+  return handled<P>(
+    async (req, params) => handler(req, await requireWorkspaceAccess(req.headers, params.workspaceId, resource, action), params),
+    "file",
   );
 }

@@ -3,13 +3,21 @@ import { existsSync } from "node:fs";
 import { join } from "node:path";
 import { expect } from "vitest";
 import { listening } from "../../helpers/ports";
-import { dataDirOf, descendants, listProcesses, postgresOn, stillRunning, type Proc } from "./processes";
+import { dataDirOf, descendants, listProcesses, matching, postgresOn, stillRunning, type Proc } from "./processes";
 import { sleep, type Terminal } from "./terminal";
 
 /** What a running command started: its process tree, and the PostgreSQL server on `pgPort` (which pg_ctl detached from it). */
 export interface Started {
   processes: Proc[];
   pgDataDir: string;
+}
+
+/** The local object store's port, from the line the runner prints when it starts it. */
+export const OBJECT_STORE_LINE = /starting the object store on 127\.0\.0\.1:(\d+)/;
+
+/** The local object store serving `port` (scripts/lib/object-store-server.mjs), among `procs`. */
+export function objectStoreOn(port: number, procs: Proc[] = listProcesses()): Proc[] {
+  return matching([`object-store-server.mjs ${port} `], procs);
 }
 
 export function snapshot(term: Terminal, pgPort: number): Started {
@@ -35,12 +43,14 @@ export async function expectNothingLeft(started: Started, ports: number[], settl
 }
 
 /**
- * After a failed test: ends whatever the command left (the terminal, the app, a PostgreSQL server on
- * `pgPort`, which gets a fast shutdown), so the next test and the next run start clean.
+ * After a failed test: ends whatever the command left (the terminal, the app, the object store on `s3Port`, a
+ * PostgreSQL server on `pgPort`, which gets a fast shutdown), so the next test and the next run start clean.
  */
-export async function endLeftovers(term: Terminal | undefined, pgPort: number, started?: Started): Promise<void> {
+export async function endLeftovers(term: Terminal | undefined, pgPort: number, started?: Started, s3Port?: number): Promise<void> {
   term?.kill();
   for (const p of stillRunning(started?.processes ?? [])) if (!p.args.includes("postgres")) tryKill(p.pid, "SIGKILL");
+  // The object store runs in a session of its own: ended by its port even when no snapshot was taken.
+  if (s3Port) for (const p of objectStoreOn(s3Port)) tryKill(p.pid, "SIGKILL");
   const master = postgresOn(pgPort)[0];
   if (!master) return;
   tryKill(master.pid, "SIGINT");

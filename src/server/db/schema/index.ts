@@ -2,3 +2,4 @@ export * from "./auth";
 export * from "./kits";
 export * from "./library";
 export * from "./preferences";
+export * from "./test-log";

@@ -46,7 +46,7 @@ const num = (v: string | boolean) => (typeof v === "string" && v.trim() !== "" &
 function specOf(kind: ShelfKind, v: Values): unknown {
   if (kind === "material") {
     const printed = v.printed === true;
-    return { printed, tensileYieldMpa: num(v.tensileYieldMpa!), yieldSource: String(v.yieldSource), shearRule: v.shearRule, derate: printed ? num(v.derate!) : 1, derateSource: printed ? String(v.derateSource) : "" };
+    return { printed, tensileYieldMpa: num(v.tensileYieldMpa!), yieldSource: String(v.yieldSource), shearRule: v.shearRule, derate: num(v.derate!), derateSource: String(v.derateSource) };
   }
   if (kind === "joint") {
     return { jointType: v.jointType, ratedAngleDeg: num(v.ratedAngleDeg!), ratedAngleSource: String(v.ratedAngleSource), plungeMm: String(v.plungeMm).trim() === "" ? null : num(v.plungeMm!), plungeSource: String(v.plungeSource) };
@@ -104,12 +104,9 @@ export function ShelfItemForm({ kind, item, materials, busy, serverErrors, submi
           <SelectField id={id("shearRule")} label="Shear allowable rule" value={String(values.shearRule)} onChange={set("shearRule")}>
             {SHEAR_RULES.map((r) => <option key={r} value={r}>{SHEAR_RULE_LABELS[r]}</option>)}
           </SelectField>
-          {values.printed ? (
-            <>
-              <TextField id={id("derate")} label="Across-layer derating (0.01 to 1)" inputMode="decimal" value={String(values.derate)} onChange={set("derate")} error={errorOf("derate")} />
-              <TextField id={id("derateSource")} label="Source of the derating" value={String(values.derateSource)} onChange={set("derateSource")} error={errorOf("derateSource")} />
-            </>
-          ) : null}
+          {/* A metal takes 1 unless a calibration from test runs (or another source) says otherwise. */}
+          <TextField id={id("derate")} label={values.printed ? "Across-layer derating (0.01 to 1)" : "Derating (1 unless calibrated)"} inputMode="decimal" value={String(values.derate)} onChange={set("derate")} error={errorOf("derate")} />
+          <TextField id={id("derateSource")} label="Source of the derating" value={String(values.derateSource)} onChange={set("derateSource")} error={errorOf("derateSource")} hint={values.printed ? undefined : "Needed only when the derating is below 1"} />
         </>
       ) : kind === "joint" ? (
         <>

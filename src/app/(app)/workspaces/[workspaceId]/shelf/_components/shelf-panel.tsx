@@ -36,7 +36,7 @@ function Figures({ item, materials }: { item: ShelfItem; materials: ShelfItem[] 
         <dd><span className="font-medium tabular-nums">{fmt(s.tensileYieldMpa, 1, "MPa")}</span> — {s.yieldSource}</dd>
         <dt className="text-ink-muted">Shear rule</dt>
         <dd>{SHEAR_RULE_LABELS[s.shearRule]}</dd>
-        {s.printed ? (
+        {s.printed || s.derate !== 1 ? (
           <>
             <dt className="text-ink-muted">Derating</dt>
             <dd><span className="font-medium tabular-nums">× {s.derate}</span> — {s.derateSource}</dd>

@@ -1,5 +1,6 @@
 import { kitPatchBody } from "@/contracts/kits";
-import { deleteKit, getKit, kitIdOrNotFound, updateKit } from "@/server/data/kits";
+import { deleteKitWithFiles } from "@/server/data/attachments";
+import { getKit, kitIdOrNotFound, updateKit } from "@/server/data/kits";
 import { readStoredLayout } from "@/server/data/layouts";
 import { readJson } from "@/server/http/body";
 import { workspaceRoute } from "@/server/http/route";
@@ -19,6 +20,7 @@ export const PATCH = workspaceRoute<Params, "kit">("kit", "update", async (req, 
 });
 
 export const DELETE = workspaceRoute<Params, "kit">("kit", "delete", async (_req, access, params) => {
-  await deleteKit(access.workspace.id, kitIdOrNotFound(params.kitId));
+  // Its test runs, photos and underlays go with it, their files too.
+  await deleteKitWithFiles(access.workspace.id, kitIdOrNotFound(params.kitId));
   return new Response(null, { status: 204 });
 });
