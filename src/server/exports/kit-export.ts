@@ -1,7 +1,7 @@
 import "server-only";
 // One kit export as an HTTP answer: the query read and checked, the kit read from its workspace (the guard
 // has already checked the role), analysed, rendered, and sent as a download named after the kit.
-import { exportQuerySchema, type ExportFile } from "@/contracts/exports";
+import { exportQuerySchema, type ExportFile, type ExportQuery } from "@/contracts/exports";
 import type { LengthUnit } from "@/figures/length-unit";
 import { kitScenes } from "@/drawing/kit-scenes";
 import type { WorkspaceAccess } from "../data/guard";
@@ -50,9 +50,13 @@ export async function kitExportResponse(file: ExportFile, req: Request, access: 
   const query = readQuery(req, exportQuerySchema(file));
   const [kit, prefs] = await Promise.all([getKit(access.workspace.id, kitId), query.unit ? null : getPreferences(access.user.id)]);
   const unit: LengthUnit = query.unit ?? prefs?.lengthUnit ?? "mm";
-  const meta = kitExportMeta(kit, access.workspace);
+  return layoutExportResponse(file, query, unit, kit.layout, kitExportMeta(kit, access.workspace));
+}
+
+/** The export `file` of a stored layout with its title-block words (a kit's head, or a shared revision). */
+export async function layoutExportResponse(file: ExportFile, query: ExportQuery, unit: LengthUnit, storedLayout: unknown, meta: ExportMeta): Promise<Response> {
   const grid = file === "envelope.csv" || file === "travel.csv" ? { travelSteps: query.travelSteps ?? 21, steerSteps: query.steerSteps ?? 41 } : undefined;
-  const ready: ExportKit = await analysedForExport(kit.layout, meta, grid);
+  const ready: ExportKit = await analysedForExport(storedLayout, meta, grid);
   switch (file) {
     case "sheet.pdf":
       return download(await sheetPdf([ready], { paper: query.paper ?? "a4", orientation: query.orientation ?? "portrait", unit }), meta, file);
