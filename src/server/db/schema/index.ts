@@ -3,3 +3,4 @@ export * from "./kits";
 export * from "./library";
 export * from "./preferences";
 export * from "./test-log";
+export * from "./searches";
