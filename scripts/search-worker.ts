@@ -19,3 +19,5 @@ const stop = () => {
 process.on("SIGTERM", stop);
 process.on("SIGINT", stop);
 process.on("SIGHUP", stop);
+// Started by a parent with an IPC channel (the integration tests): gone with that parent.
+if (process.send) process.on("disconnect", stop);

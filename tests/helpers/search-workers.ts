@@ -17,7 +17,8 @@ export function startWorker(env: Record<string, string> = {}): WorkerProcess {
   const proc = spawn(process.execPath, ["--conditions=react-server", "--import", "tsx", "scripts/search-worker.ts"], {
     cwd: root,
     env: { ...process.env, ...env },
-    stdio: ["ignore", "pipe", "pipe"],
+    // An IPC channel: the worker stops when it closes, so an interrupted test run leaves no worker behind.
+    stdio: ["ignore", "pipe", "pipe", "ipc"],
   });
   const lines: string[] = [];
   const waiters: { pattern: RegExp; resolve: (l: string) => void }[] = [];

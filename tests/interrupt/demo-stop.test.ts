@@ -1,13 +1,13 @@
 // `npm run demo` in a terminal, stopped the ways a person stops it: Ctrl-C (which reaches npm and the demo
 // script at once), Ctrl-C pressed again while it stops, SIGTERM to its process group, the terminal closed.
-// Each time the app, the object store and then PostgreSQL must stop before the prompt returns, and a kit and a
+// Each time the app, the design-search workers, the object store and then PostgreSQL must stop before the prompt returns, and a kit and a
 // file written in the first run must still be there in the next. A demo of its own beside any other (ports, cluster), serving the
 // build `npm test` made (KB_DEMO_BUILD=reuse).
 import { rmSync } from "node:fs";
 import { join } from "node:path";
 import { afterAll, afterEach, beforeAll, describe, expect, it } from "vitest";
 import { freePort } from "../helpers/ports";
-import { endLeftovers, expectNothingLeft, objectStoreOn, snapshot, type Started } from "./helpers/stopping";
+import { endLeftovers, expectNothingLeft, objectStoreOn, searchWorkers, snapshot, type Started } from "./helpers/stopping";
 import { openTerminal, repoRoot, type Terminal } from "./helpers/terminal";
 
 const CLUSTER = "pg-interrupt-demo";
@@ -60,6 +60,7 @@ async function startDemo(): Promise<{ term: Terminal; started: Started }> {
   started = snapshot(term, pgPort);
   expect(started.processes.some((p) => p.args.includes("scripts/serve.mjs")), "the app runs under the terminal").toBe(true);
   expect(objectStoreOn(s3Port, started.processes).length, "the object store runs under the terminal").toBe(1);
+  expect(searchWorkers(started.processes).length, "a design-search worker runs under the terminal").toBeGreaterThanOrEqual(1);
   dataDirs.add(started.pgDataDir);
   return { term, started };
 }
@@ -125,7 +126,7 @@ describe("npm run demo stops the app and then the database", () => {
     term.interrupt();
     expect(await term.exited(STOP_MS)).toBe(0); // stopping on Ctrl-C is how the demo ends
     await expectNothingLeft(started, [appPort, s3Port, pgPort]);
-    expect(term.output()).toMatch(/stopping the app[\s\S]*stopping the object store[\s\S]*stopping PostgreSQL/);
+    expect(term.output()).toMatch(/stopping the app[\s\S]*stopping the design-search workers[\s\S]*stopping the object store[\s\S]*stopping PostgreSQL/);
   });
 
   it("on Ctrl-C pressed again and again while it stops; the kit and the file of the first run are still there", async () => {
@@ -150,7 +151,7 @@ describe("npm run demo stops the app and then the database", () => {
     term.signalForeground("SIGTERM");
     expect(await term.exited(STOP_MS)).toBe(0);
     await expectNothingLeft(started, [appPort, s3Port, pgPort]);
-    expect(term.output()).toMatch(/stopping the app[\s\S]*stopping the object store[\s\S]*stopping PostgreSQL/);
+    expect(term.output()).toMatch(/stopping the app[\s\S]*stopping the design-search workers[\s\S]*stopping the object store[\s\S]*stopping PostgreSQL/);
   });
 
   it("when its terminal is closed", async () => {

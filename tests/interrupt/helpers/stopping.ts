@@ -20,6 +20,11 @@ export function objectStoreOn(port: number, procs: Proc[] = listProcesses()): Pr
   return matching([`object-store-server.mjs ${port} `], procs);
 }
 
+/** The design-search workers (scripts/search-worker.ts) among `procs`. */
+export function searchWorkers(procs: Proc[]): Proc[] {
+  return matching(["scripts/search-worker.ts"], procs);
+}
+
 export function snapshot(term: Terminal, pgPort: number): Started {
   const procs = listProcesses();
   const pg = postgresOn(pgPort, procs);
