@@ -5,3 +5,4 @@ export * from "./preferences";
 export * from "./test-log";
 export * from "./mail";
 export * from "./sharing";
+export * from "./searches";
