@@ -86,6 +86,21 @@ describe("exports from the editor", () => {
   });
 });
 
+describe("exports of an earlier revision", () => {
+  it("the editor showing revision 1 read-only exports revision 1, not the latest", async () => {
+    const { kit } = await apiAs<{ kit: { id: string } }>(owner, `/api/workspaces/${workspaceId}/kits`, { method: "POST", body: { name: "Pinned corner", scale: "1:10", layout: demo.layout } });
+    await apiAs(owner, `/api/workspaces/${workspaceId}/kits/${kit.id}/layout`, { method: "PUT", body: { version: 1, layout: other.layout } });
+    const page = await pageAs(browser, owner, { width: 1280, height: 800 });
+    await page.goto(`/workspaces/${workspaceId}/kits/${kit.id}?revision=1`);
+    await page.getByTestId("revision-banner").waitFor();
+    await page.getByTestId("export-menu").click();
+    await page.getByText("Of revision 1, as shown").waitFor();
+    const [download] = await Promise.all([page.waitForEvent("download"), page.getByTestId("export-sheet").click()]);
+    expect(download.suggestedFilename()).toBe("pinned-corner-rev1-sheet.pdf");
+    await expect.poll(() => page.getByTestId("export-status").textContent()).toBe("Saved pinned-corner-rev1-sheet.pdf (revision 1).");
+  });
+});
+
 describe("sheets from the compare page", () => {
   it("downloads the combined sheet of both kits, with its progress shown, in the paper and unit chosen", async () => {
     const viewer = await signUpByApi("Ines Valdane");
