@@ -1,14 +1,14 @@
 import "server-only";
 // One kit export as an HTTP answer: the query read and checked, the kit read from its workspace (the guard
 // has already checked the role), analysed, rendered, and sent as a download named after the kit.
-import { exportQuerySchema, type ExportFile } from "@/contracts/exports";
+import { exportQuerySchema, type ExportFile, type ExportQuery } from "@/contracts/exports";
 import type { LengthUnit } from "@/figures/length-unit";
 import { kitScenes } from "@/drawing/kit-scenes";
 import type { WorkspaceAccess } from "../data/guard";
 import { kitIdOrNotFound } from "../data/kits";
 import { getPreferences } from "../data/preferences";
 import { readQuery } from "../http/query";
-import { loadExportKit, type ExportKit, type ExportMeta } from "./export-kit";
+import { analysedForExport, loadExportKit, type ExportKit, type ExportMeta } from "./export-kit";
 import { sheetPdf } from "./sheet-pdf";
 import { envelopeCsv, travelCsv } from "./sweep-csv";
 import { viewSvg } from "./view-svg";
@@ -67,8 +67,21 @@ export async function kitExportResponse(file: ExportFile, req: Request, access: 
   const kitId = kitIdOrNotFound(rawKitId);
   // The query is checked before any work: a bad parameter costs nothing.
   const query = readQuery(req, exportQuerySchema(file));
-  const grid = file === "envelope.csv" || file === "travel.csv" ? { travelSteps: query.travelSteps ?? 21, steerSteps: query.steerSteps ?? 41 } : undefined;
+  const grid = exportGrid(file, query);
   const [ready, unit]: [ExportKit, LengthUnit] = await Promise.all([loadExportKit(access.workspace, kitId, query.revision ?? null, grid), exportUnit(query, access)]);
+  return exportFileResponse(file, query, unit, ready);
+}
+
+/** The envelope grid a sweep CSV asks for; other files use the full figures' grid. */
+const exportGrid = (file: ExportFile, query: ExportQuery) =>
+  file === "envelope.csv" || file === "travel.csv" ? { travelSteps: query.travelSteps ?? 21, steerSteps: query.steerSteps ?? 41 } : undefined;
+
+/** The export `file` of a stored layout with its title-block words (a shared revision). */
+export async function layoutExportResponse(file: ExportFile, query: ExportQuery, unit: LengthUnit, storedLayout: unknown, meta: ExportMeta): Promise<Response> {
+  return exportFileResponse(file, query, unit, await analysedForExport(storedLayout, meta, exportGrid(file, query)));
+}
+
+async function exportFileResponse(file: ExportFile, query: ExportQuery, unit: LengthUnit, ready: ExportKit): Promise<Response> {
   const name = exportFileName(ready.meta, file);
   switch (file) {
     case "sheet.pdf":
