@@ -131,7 +131,8 @@ describe("share links and comments", () => {
     // A reviewer neither resolves nor deletes.
     expect(await page.getByRole("button", { name: "Resolve" }).count()).toBe(0);
     await page.getByTestId("add-comment").click();
-    await page.getByTestId("comment-hint-top").getByRole("button", { name: "Pin at the centre" }).click();
+    await page.getByTestId("comment-hint-top").waitFor();
+    await page.getByTestId("view-top").getByRole("button", { name: "Pin at the centre" }).click();
     await page.getByLabel("Your name").fill("<i>Guest</i> reviewer");
     await page.getByTestId("new-comment-form").getByRole("textbox", { name: "Post comment" }).fill("Top view <b>looks</b> right");
     await page.getByTestId("new-comment-form").getByRole("button", { name: "Post comment" }).click();

@@ -118,6 +118,17 @@ export function ViewFrame({ id, title, axes, box, handles = [], children, notes 
     return () => window.removeEventListener("keydown", onKey);
   }, [tool, underlays, uView]);
 
+  // Escape also stops picking a point for a comment.
+  const stopPinning = pinning?.setPicking;
+  useEffect(() => {
+    if (!stopPinning) return;
+    const onKey = (e: KeyboardEvent) => {
+      if (e.key === "Escape" && !document.querySelector("dialog[open]")) stopPinning(false);
+    };
+    window.addEventListener("keydown", onKey);
+    return () => window.removeEventListener("keydown", onKey);
+  }, [stopPinning]);
+
   const screenPoints = t ? handles.map((h) => ({ h, at: planeToScreen(t, handlePlanePoint(layout, h)) })) : [];
 
   const hit = (p: ScreenPoint): HandleDef | null => {
