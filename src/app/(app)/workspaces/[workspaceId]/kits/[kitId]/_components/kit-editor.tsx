@@ -8,6 +8,7 @@ import { HistoryPanel } from "@/editor/library/history-panel";
 import { KitDetailsPanel } from "@/editor/library/kit-details-panel";
 import { KitLibraryProvider, type KitLibraryInit } from "@/editor/library/library-context";
 import { RevisionBanner } from "@/editor/library/revision-banner";
+import { SearchResultBanner, type SearchResultOrigin } from "@/editor/library/search-result-banner";
 import { ShelfTab } from "@/editor/library/shelf-tab";
 import { TestLogTab } from "@/editor/test-log/test-log-tab";
 import { UnderlayProvider } from "@/editor/underlay/underlay-context";
@@ -29,7 +30,7 @@ const SIDE_TABS = [
   { id: "test-log", label: "Test log", content: () => <TestLogTab /> },
 ];
 
-export function KitEditor({ init, library }: { init: EditorInit; library: KitLibraryInit }) {
+export function KitEditor({ init, library, fromSearch = null }: { init: EditorInit; library: KitLibraryInit; fromSearch?: SearchResultOrigin | null }) {
   return (
     <EditorProvider init={init}>
       <KitLibraryProvider init={library}>
@@ -37,6 +38,7 @@ export function KitEditor({ init, library }: { init: EditorInit; library: KitLib
         <UnderlayProvider workspaceId={init.kit.workspaceId} kitId={init.kit.kitId} canWrite={library.canWrite}>
           <div className="flex min-h-0 flex-1 flex-col">
             <RevisionBanner />
+            <SearchResultBanner origin={fromSearch} />
             <EditorWorkbench sideTabs={SIDE_TABS} />
           </div>
         </UnderlayProvider>
