@@ -1,8 +1,10 @@
 #!/usr/bin/env bash
 # `npm run demo`: the production app with the demo data on http://127.0.0.1:3000.
 # Installs the dependencies if needed, starts PostgreSQL (data kept in .data/pg across runs),
-# starts the local object store (files kept in .data/s3) and the local mail catcher (messages in .data/mail), migrates, seeds, builds, serves, and prints how
-# to sign in. Ctrl-C (or SIGTERM) stops the app, the mail catcher, the object store and the database. DATABASE_URL, when set, points the demo at that database instead.
+# starts the local object store (files kept in .data/s3) and the local mail catcher (messages in .data/mail), migrates,
+# seeds, builds, starts the design-search workers (KB_SEARCH_WORKERS, 1), serves, and prints how to sign in.
+# Ctrl-C (or SIGTERM) stops the app, the workers, the mail catcher, the object store and the database.
+# DATABASE_URL, when set, points the demo at that database instead.
 #
 # For a second demo beside the first (the interrupt test of `npm test` runs one): KB_DEMO_PORT (app,
 # 3000), KB_DEMO_PG_PORT (54329), KB_DEMO_PG_NAME (the cluster's folder under .data, `pg`), and
@@ -26,6 +28,7 @@ MAIL_NAME=${KB_DEMO_MAIL_NAME:-mail}
 # shellcheck disable=SC2317 # both run from traps
 cleanup() {
   kb_app_stop
+  kb_workers_stop
   kb_mail_stop
   kb_s3_stop
   kb_pg_stop
@@ -58,6 +61,7 @@ SEED_OUTPUT=$(npx --no-install tsx --conditions=react-server scripts/seed.ts) ||
 }
 
 kb_next_build_or_reuse "${KB_DEMO_BUILD:-}" || kb_die "the build failed (see above)"
+kb_workers_start "${KB_SEARCH_WORKERS:-1}" search-worker
 kb_app_start "$APP_PORT" || kb_die "the app did not start (see above)"
 
 cat <<EOF

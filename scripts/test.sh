@@ -34,6 +34,7 @@ STARTED=$SECONDS
 
 cleanup() {
   kb_app_stop
+  kb_workers_stop
   kb_mail_stop
   kb_s3_stop
   kb_pg_stop
@@ -113,6 +114,9 @@ if ! npx --no-install tsx scripts/migrate.ts; then
   MIGRATED=0
   FAILURES+=(--failure "migrations did not apply (scripts/migrate.ts)")
 fi
+# Design-search workers on the test database, as the demo runs them: the browser tests' searches need them
+# (the integration tests start and kill workers of their own beside these).
+if ((MIGRATED)); then kb_workers_start "${KB_SEARCH_WORKERS:-1}" search-worker-$RUN_NAME; fi
 
 # --- unit, component and integration tests ----------------------------------------------------
 rm -f "$UNIT_REPORT"

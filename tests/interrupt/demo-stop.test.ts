@@ -1,13 +1,13 @@
 // `npm run demo` in a terminal, stopped the ways a person stops it: Ctrl-C (which reaches npm and the demo
 // script at once), Ctrl-C pressed again while it stops, SIGTERM to its process group, the terminal closed.
-// Each time the app, the mail catcher, the object store and then PostgreSQL must stop before the prompt returns, and a kit and a
+// Each time the app, the design-search workers, the mail catcher, the object store and then PostgreSQL must stop before the prompt returns, and a kit and a
 // file written in the first run must still be there in the next. A demo of its own beside any other (ports, cluster), serving the
 // build `npm test` made (KB_DEMO_BUILD=reuse).
 import { rmSync } from "node:fs";
 import { join } from "node:path";
 import { afterAll, afterEach, beforeAll, describe, expect, it } from "vitest";
 import { freePort } from "../helpers/ports";
-import { endLeftovers, expectNothingLeft, mailCatcherOn, objectStoreOn, snapshot, STOP_ORDER, type Started } from "./helpers/stopping";
+import { endLeftovers, expectNothingLeft, mailCatcherOn, objectStoreOn, searchWorkers, snapshot, type Started, STOP_ORDER } from "./helpers/stopping";
 import { openTerminal, repoRoot, type Terminal } from "./helpers/terminal";
 
 const CLUSTER = "pg-interrupt-demo";
@@ -66,6 +66,7 @@ async function startDemo(): Promise<{ term: Terminal; started: Started }> {
   expect(started.processes.some((p) => p.args.includes("scripts/serve.mjs")), "the app runs under the terminal").toBe(true);
   expect(objectStoreOn(s3Port, started.processes).length, "the object store runs under the terminal").toBe(1);
   expect(mailCatcherOn(mailPort, started.processes).length, "the mail catcher runs under the terminal").toBe(1);
+  expect(searchWorkers(started.processes).length, "a design-search worker runs under the terminal").toBeGreaterThanOrEqual(1);
   dataDirs.add(started.pgDataDir);
   return { term, started };
 }

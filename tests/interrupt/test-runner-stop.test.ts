@@ -1,11 +1,11 @@
 // `npm test` stopped by Ctrl-C while its tests run (pressed again while it stops): vitest, the app, the
-// throwaway mail catcher, object store and PostgreSQL end before the prompt returns, and the closing line does not read as a pass.
+// design-search workers, the throwaway mail catcher, object store and PostgreSQL end before the prompt returns, and the closing line does not read as a pass.
 // A short run of one file (KB_TEST_FILES), with its own cluster and report beside the run that started it.
 import { rmSync } from "node:fs";
 import { join } from "node:path";
 import { afterAll, afterEach, expect, it } from "vitest";
 import { descendants } from "./helpers/processes";
-import { endLeftovers, expectNothingLeft, MAIL_CATCHER_LINE, mailCatcherOn, OBJECT_STORE_LINE, objectStoreOn, snapshot, type Started } from "./helpers/stopping";
+import { endLeftovers, expectNothingLeft, MAIL_CATCHER_LINE, mailCatcherOn, OBJECT_STORE_LINE, objectStoreOn, searchWorkers, snapshot, type Started } from "./helpers/stopping";
 import { openTerminal, repoRoot, sleep, type Terminal } from "./helpers/terminal";
 
 let term: Terminal | undefined;
@@ -39,6 +39,7 @@ it("npm test stops its tests and its database on Ctrl-C, and reports the run as 
   started = snapshot(term, pgPort);
   expect(objectStoreOn(s3Port, started.processes).length, "the throwaway object store runs under the terminal").toBe(1);
   expect(mailCatcherOn(mailPort, started.processes).length, "the throwaway mail catcher runs under the terminal").toBe(1);
+  expect(searchWorkers(started.processes).length, "a design-search worker runs under the terminal").toBeGreaterThanOrEqual(1);
 
   const from = term.output().length;
   term.interrupt();
@@ -46,7 +47,7 @@ it("npm test stops its tests and its database on Ctrl-C, and reports the run as 
   term.interrupt();
   expect(await term.exited(90_000)).toBe(130);
   await expectNothingLeft(started, [mailPort, mailPort + 1, s3Port, pgPort]);
-  expect(term.output()).toMatch(/stopping the mail catcher[\s\S]*stopping the object store[\s\S]*stopping PostgreSQL/);
+  expect(term.output()).toMatch(/stopping the design-search workers[\s\S]*stopping the mail catcher[\s\S]*stopping the object store[\s\S]*stopping PostgreSQL/);
   expect(term.output()).toContain("npm test stopped early (exit code 130)");
   // The closing line CI reads (npm's spinner may follow it on the terminal).
   const closing = term.output().split(/\r?\n/).filter((line) => / passed, /.test(line)).at(-1);

@@ -28,8 +28,13 @@ export function mailCatcherOn(port: number, procs: Proc[] = listProcesses()): Pr
   return matching([`mail-catcher-server.mjs ${port} `], procs);
 }
 
-/** The order a runner stops what it started: the app, the mail catcher, the object store, PostgreSQL. */
-export const STOP_ORDER = /stopping the app[\s\S]*stopping the mail catcher[\s\S]*stopping the object store[\s\S]*stopping PostgreSQL/;
+/** The order a runner stops what it started: the app, the design-search workers, the mail catcher, the object store, PostgreSQL. */
+export const STOP_ORDER = /stopping the app[\s\S]*stopping the design-search workers[\s\S]*stopping the mail catcher[\s\S]*stopping the object store[\s\S]*stopping PostgreSQL/;
+
+/** The design-search workers (scripts/search-worker.ts) among `procs`. */
+export function searchWorkers(procs: Proc[]): Proc[] {
+  return matching(["scripts/search-worker.ts"], procs);
+}
 
 export function snapshot(term: Terminal, pgPort: number): Started {
   const procs = listProcesses();

@@ -4,3 +4,5 @@ export * from "./library";
 export * from "./preferences";
 export * from "./test-log";
 export * from "./mail";
+export * from "./sharing";
+export * from "./searches";
