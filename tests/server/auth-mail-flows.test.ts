@@ -24,11 +24,11 @@ describe("address confirmation at sign-up", () => {
     expect(mail.text).toContain("Hello Wren <b>Halloran</b>,");
     expect(mail.html).toContain("Hello Wren &lt;b&gt;Halloran&lt;/b&gt;,");
     const link = linkIn(mail, `${BASE}/api/auth/verify-email?`);
-    expect(new URL(link).searchParams.get("callbackURL")).toBe("/");
+    expect(new URL(link).searchParams.get("callbackURL")).toBe("/kits");
 
     const res = await get(link);
     expect(res.status).toBe(302);
-    expect(res.headers.get("location")).toBe("/");
+    expect(res.headers.get("location")).toBe("/kits");
     expect(res.headers.getSetCookie().some((c) => c.startsWith("better-auth.session_token="))).toBe(true);
     const [after] = await db.select({ v: users.emailVerified }).from(users).where(eq(users.id, person.userId));
     expect(after!.v).toBe(true);

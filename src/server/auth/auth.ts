@@ -67,7 +67,7 @@ export const auth = betterAuth({
       // A sign-up made by server code (the demo seed) has no request and confirms its address itself.
       if (!request) return;
       if (!(await consumeRate(VERIFY_MAIL_RATE, user.id)).allowed) return;
-      await queueMail({ to: user.email, ...verifyAddressMail({ name: user.name, url: withCallback(url, "/") }) });
+      await queueMail({ to: user.email, ...verifyAddressMail({ name: user.name, url: withCallback(url, "/kits") }) });
     },
   },
   // No signed cookie cache: it would let a signed-out session be replayed for its whole max-age. The guard's
@@ -111,10 +111,11 @@ export const auth = betterAuth({
   },
 });
 
-/** better-auth's link with a callback page, so following it lands on a page rather than a JSON answer. */
+/** better-auth's link with a callback page, so following it lands in the app rather than on a JSON answer or the home page. */
 function withCallback(url: string, callback: string): string {
   const link = new URL(url);
-  if (!link.searchParams.get("callbackURL")) link.searchParams.set("callbackURL", callback);
+  const given = link.searchParams.get("callbackURL");
+  if (!given || given === "/") link.searchParams.set("callbackURL", callback);
   return link.toString();
 }
 

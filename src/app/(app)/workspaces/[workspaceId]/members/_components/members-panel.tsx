@@ -128,7 +128,7 @@ function InviteForm({ workspaceId, roles }: { workspaceId: string; roles: readon
 
 const MAIL_WORDS: Record<WorkspaceInvitationRow["mail"], string> = {
   sent: "Message sent",
-  pending: "Message not sent yet: retrying",
+  pending: "Message not sent yet (tried again automatically)",
   failed: "The message could not be sent: invite the address again to retry",
 };
 
@@ -140,6 +140,8 @@ function PendingInvitations({ workspaceId, myRole }: { workspaceId: string; myRo
   const pending = useQuery({
     queryKey: key,
     queryFn: ({ signal }) => api<{ invitations: WorkspaceInvitationRow[] }>(`/api/workspaces/${workspaceId}/invitations`, { signal }).then((r) => r.invitations),
+    // While a message is still on its way, look again now and then so "sent" shows without a reload.
+    refetchInterval: (query) => (query.state.data?.some((i) => i.mail === "pending") ? 3_000 : false),
   });
   const revoke = useMutation({
     mutationFn: (id: string) => api(`/api/workspaces/${workspaceId}/invitations/${id}`, { method: "DELETE" }),
