@@ -3,6 +3,9 @@ import { defineConfig } from "vitest/config";
 
 const root = fileURLToPath(new URL("..", import.meta.url));
 const alias = { "@": `${root}src`, "server-only": `${root}tests/helpers/server-only-stub.ts` };
+// fmin's ES module imports its own files without extensions (bundlers and tsx resolve them, Node does not):
+// vite transforms it rather than handing it to Node.
+const server = { deps: { inline: ["fmin"] } };
 
 // Three projects: pure logic (node), components (jsdom + canvas mock), and integration tests that need
 // the throwaway PostgreSQL started by scripts/test.sh (DATABASE_URL set).
@@ -14,7 +17,7 @@ export default defineConfig({
       {
         resolve: { alias },
         // Property tests run hundreds of analyses: room for a machine busy with other work.
-        test: { name: "unit", environment: "node", include: ["tests/engine/**/*.test.ts", "tests/contracts/**/*.test.ts", "tests/lib/**/*.test.ts", "tests/figures/**/*.test.ts", "tests/drawing/**/*.test.ts"], testTimeout: 30_000 },
+        test: { name: "unit", environment: "node", server, include: ["tests/engine/**/*.test.ts", "tests/contracts/**/*.test.ts", "tests/lib/**/*.test.ts", "tests/figures/**/*.test.ts", "tests/drawing/**/*.test.ts"], testTimeout: 30_000 },
       },
       {
         resolve: { alias },
@@ -30,6 +33,7 @@ export default defineConfig({
         test: {
           name: "integration",
           environment: "node",
+          server,
           include: ["tests/api/**/*.test.ts", "tests/server/**/*.test.ts"],
           fileParallelism: false,
           // Production keeps the auth rate limit on; so do these tests (and one of them checks it). The
