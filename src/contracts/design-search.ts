@@ -285,3 +285,36 @@ export function compareCandidates(a: SearchCandidate, b: SearchCandidate, prefer
   if (!am) return a.violation - b.violation || a.change - b.change;
   return preferenceScore(b, prefer) - preferenceScore(a, prefer) || a.change - b.change;
 }
+
+/** One moved figure of a candidate against the current layout. */
+export interface FigureChange {
+  readonly key: string;
+  readonly label: string;
+  readonly from: string;
+  readonly to: string;
+}
+
+function figureText(key: string, v: number | string | undefined): string {
+  const f = searchFigure(key);
+  if (v === undefined) return "—";
+  if (!f || f.kind === "choice") return String(v);
+  const n = Number(v);
+  return `${Number.isInteger(n) ? n : n.toFixed(2)}${f.unit === "°" ? "°" : ` ${f.unit}`}`;
+}
+
+/** The figures a candidate moves away from the current layout (those it leaves alone are not listed). */
+export function changesOf(current: FigureValues, values: FigureValues): FigureChange[] {
+  const out: FigureChange[] = [];
+  for (const [key, v] of Object.entries(values)) {
+    const was = current[key];
+    if (was === v || (typeof v === "number" && typeof was === "number" && Math.abs(v - was) < 0.005)) continue;
+    out.push({ key, label: searchFigure(key)?.label ?? key, from: figureText(key, was), to: figureText(key, v) });
+  }
+  return out;
+}
+
+/** The revision note of a layout kept from a search: which search, which of its layouts, what changed. */
+export function searchNote(searchId: string, rank: number, changes: readonly FigureChange[]): string {
+  const what = changes.length > 0 ? changes.map((c) => `${c.label} ${c.from} → ${c.to}`).join("; ") : "no figure changed";
+  return `From design search ${searchId.slice(0, 8)}, layout ${rank} of its best: ${what}`.slice(0, 500);
+}

@@ -78,6 +78,7 @@ export function KitDetailsPanel() {
       <fieldset className="flex flex-col gap-1">
         <legend className="mb-1 text-xs font-semibold uppercase tracking-wide text-ink/80">Targets</legend>
         <p className="text-xs text-ink-muted">Empty takes the <Link className="text-steel underline" href={`/workspaces/${kit.workspaceId}/targets`}>workspace&apos;s</Link>; a figure here is this kit&apos;s own.</p>
+        <p className="text-xs"><Link className="text-steel underline" data-testid="design-search-link" href={`/workspaces/${kit.workspaceId}/kits/${kit.kitId}/search`}>Design search</Link>: find the layouts that reach these targets.</p>
         <table className="w-full text-xs">
           <thead className="text-left text-ink-muted"><tr><th className="py-1 font-medium">Target</th><th className="py-1 font-medium">Workspace</th><th className="py-1 font-medium">This kit</th></tr></thead>
           <tbody>

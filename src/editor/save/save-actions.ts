@@ -74,10 +74,10 @@ const COPY_SUFFIX = " (my version)";
  * Saves my document as a new kit beside the original, made as a variant of the revision I started from
  * (so it remembers where it came from), with my layout as its next revision. Answers the new kit's id.
  */
-export async function saveAsNewKit(store: EditorStore): Promise<string | null> {
+export async function saveAsNewKit(store: EditorStore, suffix = COPY_SUFFIX): Promise<string | null> {
   const s = store.getState();
   const layout: Layout = s.layout;
-  const name = s.kit.name.slice(0, 120 - COPY_SUFFIX.length) + COPY_SUFFIX;
+  const name = s.kit.name.slice(0, 120 - suffix.length) + suffix;
   try {
     s.setSave({ status: "saving" });
     const made = await api<{ kit: KitDetail }>(`${kitUrl(s.kit)}/variants`, {

@@ -121,6 +121,10 @@ export interface EditorInit {
   readonly tradeoff?: NeckTradeoff | null;
   readonly fault?: LayoutFault | null;
   readonly gridStepMm?: number;
+  /** The kit's saved layout when the document opens as something else (a design search's layout): unsaved from the start. */
+  readonly savedLayout?: Layout;
+  /** The note the first save carries (a search's layout names the search). */
+  readonly note?: string;
 }
 
 const COALESCE_MS = 1000;
@@ -133,7 +137,7 @@ export function createEditorStore(init: EditorInit): EditorStore {
         kit: init.kit,
         readOnly: init.readOnly,
         layout: init.layout,
-        savedJson: JSON.stringify(init.layout),
+        savedJson: JSON.stringify(init.savedLayout ?? init.layout),
         draft: null,
         selectedHandle: null,
         preview: { steerInput: 0, travelMm: 0, sweeping: false },
@@ -144,7 +148,7 @@ export function createEditorStore(init: EditorInit): EditorStore {
         },
         live: { analysis: init.analysis, quality: "full", stale: init.analysis === null, fault: init.fault ?? null, tradeoff: init.tradeoff ?? null, seq: 0 },
         save: { status: "idle" },
-        note: "",
+        note: init.note ?? "",
 
         commit(next, options) {
           if (get().readOnly || next === get().layout) {

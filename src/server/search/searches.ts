@@ -3,14 +3,17 @@ import { randomUUID } from "node:crypto";
 import { and, asc, desc, eq } from "drizzle-orm";
 import type PgBoss from "pg-boss";
 import {
+  applyFigures,
+  changesOf,
   compareCandidates,
+  searchNote,
   SEARCH_SAMPLES_DEFAULT,
   searchQuestionSchema,
   type SearchCandidate,
   type SearchQuestion,
   type SearchView,
 } from "@/contracts/design-search";
-import { parseLayout } from "@/contracts/layout";
+import { parseLayout, type Layout } from "@/contracts/layout";
 import { db } from "../db/client";
 import { designSearchBatches, designSearches, users } from "../db/schema";
 import { getKit } from "../data/kits";
@@ -250,4 +253,19 @@ export async function resumeSearches(boss: PgBoss): Promise<number> {
     if (resend.length > 0) await sendBatches(boss, resend);
   }
   return running.length;
+}
+
+/**
+ * Layout `rank` (1-based) of a finished search's best, as the editor opens it: the searched-from layout
+ * with the candidate's figures, and the note a save of it carries.
+ */
+export async function searchResultLayout(workspaceId: string, kitId: string, searchId: string, rank: number): Promise<{ layout: Layout; note: string; search: SearchView }> {
+  const search = await getSearch(workspaceId, kitId, searchId);
+  const candidate = search.answer?.best[rank - 1];
+  if (!candidate) throw notFound("That layout of the search");
+  const [row] = await db.select({ baseLayout: designSearches.baseLayout }).from(designSearches).where(eq(designSearches.id, searchId)).limit(1);
+  const parsed = parseLayout(row?.baseLayout);
+  if (!parsed.ok) throw notFound("That layout of the search");
+  const layout = applyFigures(parsed.layout, candidate.values);
+  return { layout, note: searchNote(searchId, rank, changesOf(search.answer!.current.values, candidate.values)), search };
 }

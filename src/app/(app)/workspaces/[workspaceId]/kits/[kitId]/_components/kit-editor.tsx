@@ -8,6 +8,7 @@ import { HistoryPanel } from "@/editor/library/history-panel";
 import { KitDetailsPanel } from "@/editor/library/kit-details-panel";
 import { KitLibraryProvider, type KitLibraryInit } from "@/editor/library/library-context";
 import { RevisionBanner } from "@/editor/library/revision-banner";
+import { SearchResultBanner, type SearchResultOrigin } from "@/editor/library/search-result-banner";
 import { ShelfTab } from "@/editor/library/shelf-tab";
 import { TestLogTab } from "@/editor/test-log/test-log-tab";
 import { UnderlayProvider } from "@/editor/underlay/underlay-context";
@@ -37,7 +38,7 @@ const SIDE_TABS = [
 // Share links are the editors' to make: the tab is there for them only (the server checks the role too).
 const EDITOR_TABS = [...SIDE_TABS, { id: "share", label: "Share", content: () => <ShareLinksPanel /> }];
 
-export function KitEditor({ init, library }: { init: EditorInit; library: KitLibraryInit }) {
+export function KitEditor({ init, library, fromSearch = null }: { init: EditorInit; library: KitLibraryInit; fromSearch?: SearchResultOrigin | null }) {
   const { workspaceId, kitId } = init.kit;
   const comments = useMemo<CommentSource>(() => {
     const base = `/api/workspaces/${workspaceId}/kits/${kitId}/comments`;
@@ -53,6 +54,7 @@ export function KitEditor({ init, library }: { init: EditorInit; library: KitLib
           <CommentsProvider source={comments} revision={revision}>
             <div className="flex min-h-0 flex-1 flex-col">
               <RevisionBanner />
+              <SearchResultBanner origin={fromSearch} />
               <EditorWorkbench sideTabs={library.canWrite ? EDITOR_TABS : SIDE_TABS} />
             </div>
           </CommentsProvider>
