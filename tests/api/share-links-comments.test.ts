@@ -23,11 +23,12 @@ import * as commentRoute from "@/app/api/workspaces/[workspaceId]/kits/[kitId]/c
 import * as workspacesRoute from "@/app/api/workspaces/route";
 import { TARNWICK_10_BASE } from "@/contracts/demo-layouts";
 import { COMMENT_LIMIT } from "@/server/http/comment-rate-limit";
-import { commentNotice, noticeRecipients } from "@/server/data/comment-notice";
+import { noticeRecipients } from "@/server/data/comment-notice";
 import { db } from "@/server/db/client";
 import { kitComments, shareLinks } from "@/server/db/schema";
 import { BASE, call, download, fromAddress, randomClientIp, signUp } from "../helpers/api";
 import { addMemberByInvitation } from "../helpers/invitations";
+import { messagesTo, waitForMail } from "../helpers/mail";
 
 type K = { workspaceId: string; kitId: string };
 type T = { token: string };
@@ -277,14 +278,19 @@ describe("comments", () => {
       const t = list.json.threads.find((x: { id: string }) => x.id === res.json.comment.id);
       expect(t).toMatchObject({ body: MARKUP, authorName: "<b>Guest</b> reviewer", viaShareLink: true });
     }
-    // The notice goes to every member, its HTML part escaped, its text part the body as typed.
+    // The notice reaches every member (read back from the local mail catcher): the body as typed in the
+    // text part, escaped in the HTML part, with a link to the kit at that revision.
     const to = await noticeRecipients(ws, null);
     expect(to.sort()).toEqual([owner.email, editor.email, viewer.email].sort());
-    const notice = commentNotice(to, { name: `Harrowgate <i>10</i> <script>x()</script>`, url: `${BASE}/workspaces/${ws}/kits/${kitId}` }, res.json.comment);
-    expect(notice.text).toContain(MARKUP);
-    expect(notice.html).not.toMatch(/<script|<img|<b>|<i>/);
-    expect(notice.html).toContain("&lt;script&gt;alert(&quot;x&quot;)&lt;/script&gt;");
-    expect(notice.html).toContain("Harrowgate &lt;i&gt;10&lt;/i&gt;");
+    for (const who of [owner, editor, viewer]) {
+      const mail = await waitForMail(who.email, /^<b>Guest<\/b> reviewer \(through a share link\) commented on Harrowgate/);
+      expect(mail.subject).toContain("Harrowgate <i>10</i> <script>x()</script>");
+      expect(mail.text).toContain(MARKUP);
+      expect(mail.text).toContain(`${BASE}/workspaces/${ws}/kits/${kitId}?revision=2`);
+      expect(mail.html).not.toMatch(/<script|<img|<b>|<i>/);
+      expect(mail.html).toContain("&lt;script&gt;alert(&quot;x&quot;)&lt;/script&gt;");
+      expect(mail.html).toContain("Harrowgate &lt;i&gt;10&lt;/i&gt;");
+    }
     // The reviewer sees the thread through the link; it may not be pinned to another revision.
     const shared = await sharedComments(made.token);
     expect(shared.json.threads.map((t: { id: string }) => t.id)).toContain(res.json.comment.id);
@@ -322,6 +328,10 @@ describe("comments", () => {
     expect(started.status).toBe(201);
     expect(started.json.comment).toMatchObject({ authorName: "Nell Ashgrove", viaShareLink: false, canDelete: true, resolvedAt: null });
     const id = started.json.comment.id;
+    // Its notice goes to the other members, not to its writer.
+    await waitForMail(owner.email, /^Nell Ashgrove commented on/);
+    await waitForMail(editor.email, /^Nell Ashgrove commented on/);
+    expect((await messagesTo(viewer.email)).filter((m) => /^Nell Ashgrove commented on/.test(m.subject))).toEqual([]);
     const reply = await call<K>(commentsRoute.POST, "POST", kitPath("/comments"), kp(), { cookie: editor.cookie, body: { parentId: id, body: "Yes, 0.3 mm." } });
     expect(reply.status).toBe(201);
     expect(reply.json.comment).toMatchObject({ parentId: id, view: "joint", xMm: 3, yMm: 4, revision: 1 });

@@ -21,7 +21,7 @@ export function TabSet({ label, tabs, initial, className = "" }: { label: string
   };
   return (
     <div className={`flex min-h-0 flex-col ${className}`}>
-      <div role="tablist" aria-label={label} className="flex shrink-0 gap-1 border-b border-ink/10 px-1">
+      <div role="tablist" aria-label={label} className="flex shrink-0 flex-wrap gap-x-1 border-b border-ink/10 px-1">
         {tabs.map((t) => (
           <button
             key={t.id}

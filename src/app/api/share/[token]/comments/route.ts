@@ -4,7 +4,6 @@ import { noticeCommentPosted } from "@/server/data/comment-notice";
 import { createComment, listComments } from "@/server/data/comments";
 import { readSharedKit } from "@/server/data/shared-kit";
 import type { OpenShareLink } from "@/server/data/share-links";
-import { env } from "@/server/env";
 import { readJson } from "@/server/http/body";
 import { takeCommentAllowance } from "@/server/http/comment-rate-limit";
 import { HttpError } from "@/server/http/errors";
@@ -32,6 +31,6 @@ export const POST = shareRoute<Params>(async (req, link) => {
   takeCommentAllowance(`share:${link.id}:${clientAddress(req.headers) ?? "unknown"}`);
   const shared = await readSharedKit(link);
   const comment = await createComment(link.workspaceId, link.kitId, { kind: "shared", shareLinkId: link.id, name: body.authorName }, body, READER, shared.revision);
-  await noticeCommentPosted(link.workspaceId, { id: link.kitId, name: shared.kitName }, null, comment, new URL(env.BETTER_AUTH_URL).origin);
+  await noticeCommentPosted(link.workspaceId, { id: link.kitId, name: shared.kitName }, null, comment);
   return Response.json({ comment }, { status: 201 });
 });

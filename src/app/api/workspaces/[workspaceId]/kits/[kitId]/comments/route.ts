@@ -3,7 +3,6 @@ import { roleCan } from "@/contracts/roles";
 import { noticeCommentPosted } from "@/server/data/comment-notice";
 import { createComment, listComments } from "@/server/data/comments";
 import { getKit, kitIdOrNotFound } from "@/server/data/kits";
-import { env } from "@/server/env";
 import { readJson } from "@/server/http/body";
 import { takeCommentAllowance } from "@/server/http/comment-rate-limit";
 import { workspaceRoute } from "@/server/http/route";
@@ -23,6 +22,6 @@ export const POST = workspaceRoute<Params, "kit">("kit", "read", async (req, acc
   takeCommentAllowance(`user:${access.user.id}`);
   const comment = await createComment(access.workspace.id, kitId, { kind: "member", userId: access.user.id, name: access.user.name }, body, readerOf(access));
   const kit = await getKit(access.workspace.id, kitId);
-  await noticeCommentPosted(access.workspace.id, { id: kitId, name: kit.name }, access.user.id, comment, new URL(env.BETTER_AUTH_URL).origin);
+  await noticeCommentPosted(access.workspace.id, { id: kitId, name: kit.name }, access.user.id, comment);
   return Response.json({ comment }, { status: 201 });
 });
