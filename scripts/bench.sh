@@ -8,7 +8,7 @@
 #     worker processes, and their ratio),
 #  5. the browser benchmark (scripts/bench-browser.ts: the editor drag, the kit page), all against one
 #     production server on 127.0.0.1:3200 with its own throwaway database (.data/pg-bench on 54349) and
-#     object store (.data/s3-bench on 54402), stopped afterwards.
+#     object store (.data/s3-bench on 54402) and mail catcher (.data/mail-bench on 54455), stopped afterwards.
 set -euo pipefail
 
 # shellcheck source=scripts/lib/runner.sh
@@ -18,6 +18,7 @@ source "$(dirname "$0")/lib/runner.sh"
 cleanup() {
   kb_app_stop
   kb_workers_stop
+  kb_mail_stop
   kb_s3_stop
   kb_pg_stop
 }
@@ -45,6 +46,10 @@ kb_pg_start pg-bench "$PG_PORT" fresh
 S3_PORT=$(kb_free_port 54402) || kb_die "no free port for the bench object store (54402-54422)"
 unset KB_S3_ENDPOINT # nor against the user's object store
 kb_s3_start s3-bench "$S3_PORT" fresh
+MAIL_PORT=$(kb_free_port 54455) || kb_die "no free port for the bench mail catcher (54455-54475)"
+MAIL_API_PORT=$(kb_free_port $((MAIL_PORT + 1))) || kb_die "no free port for the bench mail catcher's API"
+unset KB_SMTP_HOST
+kb_mail_start mail-bench "$MAIL_PORT" "$MAIL_API_PORT" fresh
 npx --no-install tsx scripts/migrate.ts
 kb_next_build_or_reuse "${KB_BENCH_BUILD:-}" || kb_die "the build failed"
 kb_app_start "$APP_PORT" .data/app-bench.log || kb_die "the app did not start (log: .data/app-bench.log)"

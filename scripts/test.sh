@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # `npm test`: every test, on a fresh machine, with nothing left running afterwards.
-# Installs what is missing (Chromium, poppler-utils), starts a throwaway PostgreSQL and object store, migrates,
+# Installs what is missing (Chromium, poppler-utils), starts a throwaway PostgreSQL, object store and mail catcher, migrates,
 # runs vitest (unit, component, integration), builds and starts the app, runs the browser tests, stops
 # everything, and ends with the line `N passed, N failed` (CI reads that line) and a non-zero exit on any failure.
 #
@@ -35,6 +35,7 @@ STARTED=$SECONDS
 cleanup() {
   kb_app_stop
   kb_workers_stop
+  kb_mail_stop
   kb_s3_stop
   kb_pg_stop
 }
@@ -85,6 +86,8 @@ fi
 PG_PORT=$(kb_free_port 54339) || kb_die "no free port for the test PostgreSQL (54339-54359)"
 APP_PORT=$(kb_free_port 3100) || kb_die "no free port for the test app (3100-3120)"
 S3_PORT=$(kb_free_port 54381) || kb_die "no free port for the test object store (54381-54401)"
+MAIL_PORT=$(kb_free_port 54432) || kb_die "no free port for the test mail catcher (54432-54452)"
+MAIL_API_PORT=$(kb_free_port $((MAIL_PORT + 1))) || kb_die "no free port for the test mail catcher's API"
 kb_env_test "$APP_PORT"
 if [[ -n ${TEST_DATABASE_URL:-} ]]; then
   export DATABASE_URL=$TEST_DATABASE_URL
@@ -101,6 +104,9 @@ else
   unset KB_S3_ENDPOINT
   kb_s3_start "s3-$RUN_NAME" "$S3_PORT" fresh
 fi
+# The tests read what the app sends: always a throwaway mail catcher, never a real SMTP server.
+unset KB_SMTP_HOST
+kb_mail_start "mail-$RUN_NAME" "$MAIL_PORT" "$MAIL_API_PORT" fresh
 
 MIGRATED=1
 kb_say "applying migrations"

@@ -1,6 +1,6 @@
 # shellcheck shell=bash
 # What every runner (demo, test, bench) sources first: the helpers, the environments, PostgreSQL, the app,
-# the design-search workers and the object store lifecycles, stopping on signals, then the working directory set to the repo.
+# the design-search workers, the object store and the mail catcher lifecycles, stopping on signals, then the working directory set to the repo.
 # shellcheck source=scripts/lib/common.sh
 source "$(dirname "${BASH_SOURCE[0]}")/common.sh"
 # shellcheck source=scripts/lib/env.sh
@@ -11,6 +11,8 @@ source "$KB_ROOT/scripts/lib/pg.sh"
 source "$KB_ROOT/scripts/lib/app.sh"
 # shellcheck source=scripts/lib/object-store.sh
 source "$KB_ROOT/scripts/lib/object-store.sh"
+# shellcheck source=scripts/lib/mail-catcher.sh
+source "$KB_ROOT/scripts/lib/mail-catcher.sh"
 # shellcheck source=scripts/lib/workers.sh
 source "$KB_ROOT/scripts/lib/workers.sh"
 # shellcheck source=scripts/lib/signals.sh

@@ -38,6 +38,19 @@ const envSchema = z.object({
   KB_S3_FORCE_PATH_STYLE: z.enum(["true", "false"]).default("false").transform((v) => v === "true"),
   // Largest file one upload may carry (bytes); larger ones are answered 413 before anything is stored.
   KB_MAX_UPLOAD_BYTES: z.coerce.number().int().min(1024).max(100_000_000).default(10_485_760),
+  // E-mail (verification, password reset, invitations, notices) over SMTP through nodemailer: any provider's
+  // SMTP relay. Unset host: nothing is sent, messages wait in the outbox (mail_outbox) and a warning is
+  // logged. KB_SMTP_SECURE=true for implicit TLS (port 465); false upgrades with STARTTLS when offered.
+  KB_SMTP_HOST: z.string().min(1).optional(),
+  KB_SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(587),
+  KB_SMTP_SECURE: z.enum(["true", "false"]).default("false").transform((v) => v === "true"),
+  KB_SMTP_USER: z.string().min(1).optional(),
+  KB_SMTP_PASSWORD: z.string().min(1).optional(),
+  KB_MAIL_FROM: z.string().min(3).default("Knucklebench <no-reply@knucklebench.invalid>"),
+  // The local mail catcher's API (scripts/lib/mail-catcher.sh sets both): turns on the mail page, where the
+  // demo's people read what was sent. Only with a catcher on loopback; with a real provider the page is off.
+  KB_MAIL_INBOX_URL: z.string().url().optional(),
+  KB_MAIL_INBOX_TOKEN: z.string().min(1).optional(),
 });
 
 export type Env = z.infer<typeof envSchema>;
@@ -50,7 +63,19 @@ const checkedEnvSchema = envSchema
   .refine((e) => !e.KB_S3_ACCESS_KEY_ID === !e.KB_S3_SECRET_ACCESS_KEY, {
     message: "set both KB_S3_ACCESS_KEY_ID and KB_S3_SECRET_ACCESS_KEY, or neither",
     path: ["KB_S3_SECRET_ACCESS_KEY"],
+  })
+  .refine((e) => !e.KB_SMTP_USER === !e.KB_SMTP_PASSWORD, {
+    message: "set both KB_SMTP_USER and KB_SMTP_PASSWORD, or neither",
+    path: ["KB_SMTP_PASSWORD"],
+  })
+  .refine((e) => !e.KB_MAIL_INBOX_URL || (isLoopback(new URL(e.KB_MAIL_INBOX_URL).hostname) && isLoopback(e.KB_SMTP_HOST ?? "")), {
+    message: "the mail page reads only a local mail catcher: KB_MAIL_INBOX_URL and KB_SMTP_HOST must both be on loopback",
+    path: ["KB_MAIL_INBOX_URL"],
   });
+
+function isLoopback(host: string): boolean {
+  return host === "localhost" || host === "[::1]" || host === "::1" || /^127\.\d+\.\d+\.\d+$/.test(host);
+}
 
 function readEnv(): Env {
   const parsed = checkedEnvSchema.safeParse(process.env);

@@ -1,17 +1,18 @@
 // `npm run demo` in a terminal, stopped the ways a person stops it: Ctrl-C (which reaches npm and the demo
 // script at once), Ctrl-C pressed again while it stops, SIGTERM to its process group, the terminal closed.
-// Each time the app, the design-search workers, the object store and then PostgreSQL must stop before the prompt returns, and a kit and a
+// Each time the app, the design-search workers, the mail catcher, the object store and then PostgreSQL must stop before the prompt returns, and a kit and a
 // file written in the first run must still be there in the next. A demo of its own beside any other (ports, cluster), serving the
 // build `npm test` made (KB_DEMO_BUILD=reuse).
 import { rmSync } from "node:fs";
 import { join } from "node:path";
 import { afterAll, afterEach, beforeAll, describe, expect, it } from "vitest";
 import { freePort } from "../helpers/ports";
-import { endLeftovers, expectNothingLeft, objectStoreOn, searchWorkers, snapshot, type Started } from "./helpers/stopping";
+import { endLeftovers, expectNothingLeft, mailCatcherOn, objectStoreOn, searchWorkers, snapshot, type Started, STOP_ORDER } from "./helpers/stopping";
 import { openTerminal, repoRoot, type Terminal } from "./helpers/terminal";
 
 const CLUSTER = "pg-interrupt-demo";
 const STORE = "s3-interrupt-demo";
+const MAILBOX = "mail-interrupt-demo";
 const KIT_NAME = `Interrupt check ${Date.now()}`;
 const START_MS = 180_000;
 const STOP_MS = 90_000;
@@ -19,6 +20,7 @@ const STOP_MS = 90_000;
 let appPort: number;
 let pgPort: number;
 let s3Port: number;
+let mailPort: number;
 let term: Terminal | undefined;
 let started: Started | undefined;
 const dataDirs = new Set<string>();
@@ -27,20 +29,21 @@ beforeAll(async () => {
   appPort = await freePort();
   pgPort = await freePort();
   s3Port = await freePort();
+  mailPort = await freePort(); // its API on the next port
   rmSync(join(repoRoot, ".data", CLUSTER), { recursive: true, force: true });
-  for (const f of [STORE, `${STORE}.keys`]) rmSync(join(repoRoot, ".data", f), { recursive: true, force: true });
+  for (const f of [STORE, `${STORE}.keys`, MAILBOX, `${MAILBOX}.keys`]) rmSync(join(repoRoot, ".data", f), { recursive: true, force: true });
 });
 
 // Only does anything when a test failed half-way.
 afterEach(async () => {
-  await endLeftovers(term, pgPort, started, s3Port);
+  await endLeftovers(term, pgPort, started, s3Port, mailPort);
   term = started = undefined;
 });
 
 afterAll(() => {
   for (const dir of dataDirs) rmSync(dir, { recursive: true, force: true });
   rmSync(join(repoRoot, ".data", `${CLUSTER}.password`), { force: true });
-  for (const f of [STORE, `${STORE}.keys`, `${STORE}.log`]) rmSync(join(repoRoot, ".data", f), { recursive: true, force: true });
+  for (const f of [STORE, `${STORE}.keys`, `${STORE}.log`, MAILBOX, `${MAILBOX}.keys`, `${MAILBOX}.log`]) rmSync(join(repoRoot, ".data", f), { recursive: true, force: true });
 });
 
 const base = () => `http://127.0.0.1:${appPort}`;
@@ -52,14 +55,17 @@ async function startDemo(): Promise<{ term: Terminal; started: Started }> {
     KB_DEMO_PG_NAME: CLUSTER,
     KB_DEMO_S3_PORT: String(s3Port),
     KB_DEMO_S3_NAME: STORE,
+    KB_DEMO_MAIL_PORT: String(mailPort),
+    KB_DEMO_MAIL_NAME: MAILBOX,
     KB_DEMO_BUILD: "reuse",
   });
-  await term.waitFor(/Press Ctrl-C to stop the app, the object store and the database/, START_MS);
+  await term.waitFor(/Press Ctrl-C to stop the app, the mail catcher, the object store and the database/, START_MS);
   const health = await fetch(`${base()}/api/health`);
   expect(health.status).toBe(200);
   started = snapshot(term, pgPort);
   expect(started.processes.some((p) => p.args.includes("scripts/serve.mjs")), "the app runs under the terminal").toBe(true);
   expect(objectStoreOn(s3Port, started.processes).length, "the object store runs under the terminal").toBe(1);
+  expect(mailCatcherOn(mailPort, started.processes).length, "the mail catcher runs under the terminal").toBe(1);
   expect(searchWorkers(started.processes).length, "a design-search worker runs under the terminal").toBeGreaterThanOrEqual(1);
   dataDirs.add(started.pgDataDir);
   return { term, started };
@@ -125,8 +131,8 @@ describe("npm run demo stops the app and then the database", () => {
 
     term.interrupt();
     expect(await term.exited(STOP_MS)).toBe(0); // stopping on Ctrl-C is how the demo ends
-    await expectNothingLeft(started, [appPort, s3Port, pgPort]);
-    expect(term.output()).toMatch(/stopping the app[\s\S]*stopping the design-search workers[\s\S]*stopping the object store[\s\S]*stopping PostgreSQL/);
+    await expectNothingLeft(started, [appPort, mailPort, mailPort + 1, s3Port, pgPort]);
+    expect(term.output()).toMatch(STOP_ORDER);
   });
 
   it("on Ctrl-C pressed again and again while it stops; the kit and the file of the first run are still there", async () => {
@@ -141,7 +147,7 @@ describe("npm run demo stops the app and then the database", () => {
     await term.waitFor(/stopping PostgreSQL/, STOP_MS, from);
     term.interrupt();
     expect(await term.exited(STOP_MS)).toBe(0);
-    await expectNothingLeft(started, [appPort, s3Port, pgPort]);
+    await expectNothingLeft(started, [appPort, mailPort, mailPort + 1, s3Port, pgPort]);
   });
 
   it("on SIGTERM to its process group", async () => {
@@ -150,8 +156,8 @@ describe("npm run demo stops the app and then the database", () => {
 
     term.signalForeground("SIGTERM");
     expect(await term.exited(STOP_MS)).toBe(0);
-    await expectNothingLeft(started, [appPort, s3Port, pgPort]);
-    expect(term.output()).toMatch(/stopping the app[\s\S]*stopping the design-search workers[\s\S]*stopping the object store[\s\S]*stopping PostgreSQL/);
+    await expectNothingLeft(started, [appPort, mailPort, mailPort + 1, s3Port, pgPort]);
+    expect(term.output()).toMatch(STOP_ORDER);
   });
 
   it("when its terminal is closed", async () => {
@@ -161,6 +167,6 @@ describe("npm run demo stops the app and then the database", () => {
     term.hangUp();
     await term.exited(STOP_MS);
     // No prompt comes back to wait for: the script stops on its own, within the time a stop takes.
-    await expectNothingLeft(started, [appPort, s3Port, pgPort], 30_000);
+    await expectNothingLeft(started, [appPort, mailPort, mailPort + 1, s3Port, pgPort], 30_000);
   });
 });

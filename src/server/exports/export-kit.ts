@@ -1,11 +1,14 @@
 import "server-only";
 // What every export is made from: a layout, the words of its title block, and its analysis. Anything that
-// has a layout and those words can be exported (a kit here; a compare set or a shared link later).
+// has a layout and those words can be exported: a kit's head or a pinned revision (loadExportKit), from
+// the kit's own routes, a comparison's sheet or a share link.
 import { FULL_FIGURES_GRID, type AnalyzeGrid } from "@/contracts/analyze";
 import { parseLayout, type Layout } from "@/contracts/layout";
 import type { AnalysisResult } from "@/engine";
 import { runAnalysis } from "../analysis/pool";
+import { getKit } from "../data/kits";
 import { readStoredLayout } from "../data/layouts";
+import { getRevision } from "../data/revisions";
 import { HttpError } from "../http/errors";
 
 /** The title block's words. */
@@ -28,29 +31,23 @@ export interface ExportKit {
   readonly analysis: AnalysisResult;
 }
 
-interface StoredKit {
-  readonly name: string;
-  readonly scale: string;
-  readonly headRevision: number;
-  readonly createdByName: string | null;
-  readonly updatedByName: string | null;
-  readonly updatedAt: string;
-}
-
-/** The revision a sheet names: the kit's head revision (the layout it shows). */
-export function kitRevision(kit: { readonly headRevision: number }): string {
-  return String(kit.headRevision);
-}
-
-export function kitExportMeta(kit: StoredKit, workspace: { readonly name: string }): ExportMeta {
-  return {
+/**
+ * A kit of this workspace at a revision, analysed and ready to export: `revision` null is the head. The
+ * title block names that revision, who wrote it and when (a rename or a change of targets writes no
+ * revision, so it changes neither). 404 for a kit not in the workspace or a revision it does not have.
+ */
+export async function loadExportKit(workspace: { readonly id: string; readonly name: string }, kitId: string, revision: number | null, grid?: AnalyzeGrid): Promise<ExportKit> {
+  const kit = await getKit(workspace.id, kitId);
+  const rev = await getRevision(workspace.id, kit.id, revision ?? kit.headRevision);
+  const meta: ExportMeta = {
     kitName: kit.name,
     workspaceName: workspace.name,
-    revision: kitRevision(kit),
-    author: kit.updatedByName ?? kit.createdByName ?? "—",
-    date: kit.updatedAt,
+    revision: String(rev.number),
+    author: rev.authorName ?? "—",
+    date: rev.createdAt,
     modelScale: kit.scale,
   };
+  return analysedForExport(rev.layout, meta, grid);
 }
 
 /**

@@ -1,14 +1,14 @@
 import "server-only";
 // One kit export as an HTTP answer: the query read and checked, the kit read from its workspace (the guard
 // has already checked the role), analysed, rendered, and sent as a download named after the kit.
-import { exportQuerySchema, type ExportFile } from "@/contracts/exports";
+import { exportQuerySchema, type ExportFile, type ExportQuery } from "@/contracts/exports";
 import type { LengthUnit } from "@/figures/length-unit";
 import { kitScenes } from "@/drawing/kit-scenes";
 import type { WorkspaceAccess } from "../data/guard";
-import { getKit, kitIdOrNotFound } from "../data/kits";
+import { kitIdOrNotFound } from "../data/kits";
 import { getPreferences } from "../data/preferences";
 import { readQuery } from "../http/query";
-import { analysedForExport, kitExportMeta, type ExportKit, type ExportMeta } from "./export-kit";
+import { analysedForExport, loadExportKit, type ExportKit, type ExportMeta } from "./export-kit";
 import { sheetPdf } from "./sheet-pdf";
 import { envelopeCsv, travelCsv } from "./sweep-csv";
 import { viewSvg } from "./view-svg";
@@ -21,15 +21,22 @@ const TYPES: Record<string, string> = {
   svg: "image/svg+xml; charset=utf-8",
 };
 
-/** A file name from the kit's name: lower-case letters, digits and dashes, then the revision and the part. */
-export function exportFileName(meta: ExportMeta, file: ExportFile): string {
-  const slug = meta.kitName.normalize("NFKD").toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-+|-+$/g, "").slice(0, 60) || "kit";
-  return `${slug}-rev${meta.revision.replace(/[^A-Za-z0-9]+/g, "")}-${file}`;
+/** A kit's name as a file name: lower-case letters, digits and dashes. */
+export function kitSlug(kitName: string, max = 60): string {
+  return kitName.normalize("NFKD").toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-+|-+$/g, "").slice(0, max).replace(/-+$/, "") || "kit";
 }
 
-function download(body: string | Buffer, meta: ExportMeta, file: ExportFile): Response {
-  const ext = file.slice(file.lastIndexOf(".") + 1);
-  const name = exportFileName(meta, file);
+/** The revision as a file name's part: "rev2". */
+export const revisionSlug = (meta: ExportMeta) => `rev${meta.revision.replace(/[^A-Za-z0-9]+/g, "")}`;
+
+/** A file name from the kit's name, then the revision and the part. */
+export function exportFileName(meta: ExportMeta, file: ExportFile): string {
+  return `${kitSlug(meta.kitName)}-${revisionSlug(meta)}-${file}`;
+}
+
+/** An export as a download named `name` (its type from the name's extension), never cached. */
+export function download(body: string | Buffer, name: string): Response {
+  const ext = name.slice(name.lastIndexOf(".") + 1);
   const bytes = typeof body === "string" ? Buffer.from(body, "utf8") : body;
   return new Response(new Uint8Array(bytes), {
     headers: {
@@ -43,30 +50,49 @@ function download(body: string | Buffer, meta: ExportMeta, file: ExportFile): Re
   });
 }
 
-/** The export `file` of the kit `rawKitId` in the caller's workspace (404 for a kit of another workspace). */
+/** The unit asked for, else the person's preference. */
+export async function exportUnit(query: { readonly unit?: LengthUnit }, access: WorkspaceAccess): Promise<LengthUnit> {
+  return query.unit ?? (await getPreferences(access.user.id)).lengthUnit;
+}
+
+/**
+ * The export `file` of the kit `rawKitId` in the caller's workspace, at its head or at `?revision=n` (404
+ * for a kit of another workspace or a revision the kit does not have).
+ */
 export async function kitExportResponse(file: ExportFile, req: Request, access: WorkspaceAccess, rawKitId: string): Promise<Response> {
   const kitId = kitIdOrNotFound(rawKitId);
   // The query is checked before any work: a bad parameter costs nothing.
   const query = readQuery(req, exportQuerySchema(file));
-  const [kit, prefs] = await Promise.all([getKit(access.workspace.id, kitId), query.unit ? null : getPreferences(access.user.id)]);
-  const unit: LengthUnit = query.unit ?? prefs?.lengthUnit ?? "mm";
-  const meta = kitExportMeta(kit, access.workspace);
-  const grid = file === "envelope.csv" || file === "travel.csv" ? { travelSteps: query.travelSteps ?? 21, steerSteps: query.steerSteps ?? 41 } : undefined;
-  const ready: ExportKit = await analysedForExport(kit.layout, meta, grid);
+  const grid = exportGrid(file, query);
+  const [ready, unit]: [ExportKit, LengthUnit] = await Promise.all([loadExportKit(access.workspace, kitId, query.revision ?? null, grid), exportUnit(query, access)]);
+  return exportFileResponse(file, query, unit, ready);
+}
+
+/** The envelope grid a sweep CSV asks for; other files use the full figures' grid. */
+const exportGrid = (file: ExportFile, query: ExportQuery) =>
+  file === "envelope.csv" || file === "travel.csv" ? { travelSteps: query.travelSteps ?? 21, steerSteps: query.steerSteps ?? 41 } : undefined;
+
+/** The export `file` of a stored layout with its title-block words (a shared revision). */
+export async function layoutExportResponse(file: ExportFile, query: ExportQuery, unit: LengthUnit, storedLayout: unknown, meta: ExportMeta): Promise<Response> {
+  return exportFileResponse(file, query, unit, await analysedForExport(storedLayout, meta, exportGrid(file, query)));
+}
+
+async function exportFileResponse(file: ExportFile, query: ExportQuery, unit: LengthUnit, ready: ExportKit): Promise<Response> {
+  const name = exportFileName(ready.meta, file);
   switch (file) {
     case "sheet.pdf":
-      return download(await sheetPdf([ready], { paper: query.paper ?? "a4", orientation: query.orientation ?? "portrait", unit }), meta, file);
+      return download(await sheetPdf([ready], { paper: query.paper ?? "a4", orientation: query.orientation ?? "portrait", unit }), name);
     case "views.dxf":
-      return download(viewsDxf(ready), meta, file);
+      return download(viewsDxf(ready), name);
     case "envelope.csv":
-      return download(envelopeCsv(ready.layout, ready.analysis, unit), meta, file);
+      return download(envelopeCsv(ready.layout, ready.analysis, unit), name);
     case "travel.csv":
-      return download(travelCsv(ready.analysis, unit), meta, file);
+      return download(travelCsv(ready.analysis, unit), name);
     case "front.svg":
     case "top.svg":
     case "joint.svg": {
       const scenes = kitScenes(ready.layout, ready.analysis, unit);
-      return download(viewSvg(scenes[file.slice(0, -4) as "front" | "top" | "joint"], meta, unit), meta, file);
+      return download(viewSvg(scenes[file.slice(0, -4) as "front" | "top" | "joint"], ready.meta, unit), name);
     }
   }
 }

@@ -8,6 +8,7 @@ import { isDataStoreUnavailable } from "../db/unavailable";
 import { dataStoreUnavailable, errorResponse, HttpError } from "./errors";
 import { describeError } from "./error-log";
 import { isUploadMediaType, UPLOAD_MEDIA_TYPE } from "./upload";
+import { openShareLink, type OpenShareLink } from "../data/share-links";
 
 type RouteContext<P> = { params: Promise<P> };
 
@@ -103,4 +104,21 @@ export function workspaceUploadRoute<P extends { workspaceId: string }, R extend
     async (req, params) => handler(req, await requireWorkspaceAccess(req.headers, params.workspaceId, resource, action), params),
     "file",
   );
+}
+
+/** Keeps a shared kit's answers out of search engines and shared caches. */
+export const SHARE_HEADERS = { "x-robots-tag": "noindex, nofollow", "cache-control": "private, no-store", "referrer-policy": "no-referrer" } as const;
+
+function withShareHeaders(res: Response): Response {
+  for (const [k, v] of Object.entries(SHARE_HEADERS)) res.headers.set(k, v);
+  return res;
+}
+
+/**
+ * A route under /api/share/[token]/…: no session, the link checked on every request (an unknown, revoked
+ * or expired token is one 404). What it may do is what the link grants: read, and comment when allowed.
+ */
+export function shareRoute<P extends { token: string }>(handler: (req: Request, link: OpenShareLink, params: P) => Promise<Response>) {
+  const run = handled<P>(async (req, params) => handler(req, await openShareLink(params.token), params));
+  return async (req: Request, ctx: RouteContext<P>) => withShareHeaders(await run(req, ctx));
 }

@@ -20,6 +20,17 @@ export function objectStoreOn(port: number, procs: Proc[] = listProcesses()): Pr
   return matching([`object-store-server.mjs ${port} `], procs);
 }
 
+/** The local mail catcher's SMTP port, from the line the runner prints when it starts it. */
+export const MAIL_CATCHER_LINE = /starting the mail catcher: SMTP on 127\.0\.0\.1:(\d+)/;
+
+/** The local mail catcher whose SMTP side serves `port` (scripts/lib/mail-catcher-server.mjs), among `procs`. */
+export function mailCatcherOn(port: number, procs: Proc[] = listProcesses()): Proc[] {
+  return matching([`mail-catcher-server.mjs ${port} `], procs);
+}
+
+/** The order a runner stops what it started: the app, the design-search workers, the mail catcher, the object store, PostgreSQL. */
+export const STOP_ORDER = /stopping the app[\s\S]*stopping the design-search workers[\s\S]*stopping the mail catcher[\s\S]*stopping the object store[\s\S]*stopping PostgreSQL/;
+
 /** The design-search workers (scripts/search-worker.ts) among `procs`. */
 export function searchWorkers(procs: Proc[]): Proc[] {
   return matching(["scripts/search-worker.ts"], procs);
@@ -48,14 +59,16 @@ export async function expectNothingLeft(started: Started, ports: number[], settl
 }
 
 /**
- * After a failed test: ends whatever the command left (the terminal, the app, the object store on `s3Port`, a
+ * After a failed test: ends whatever the command left (the terminal, the app, the object store on `s3Port`, the mail
+ * catcher on `mailPort`, a
  * PostgreSQL server on `pgPort`, which gets a fast shutdown), so the next test and the next run start clean.
  */
-export async function endLeftovers(term: Terminal | undefined, pgPort: number, started?: Started, s3Port?: number): Promise<void> {
+export async function endLeftovers(term: Terminal | undefined, pgPort: number, started?: Started, s3Port?: number, mailPort?: number): Promise<void> {
   term?.kill();
   for (const p of stillRunning(started?.processes ?? [])) if (!p.args.includes("postgres")) tryKill(p.pid, "SIGKILL");
   // The object store runs in a session of its own: ended by its port even when no snapshot was taken.
   if (s3Port) for (const p of objectStoreOn(s3Port)) tryKill(p.pid, "SIGKILL");
+  if (mailPort) for (const p of mailCatcherOn(mailPort)) tryKill(p.pid, "SIGKILL");
   const master = postgresOn(pgPort)[0];
   if (!master) return;
   tryKill(master.pid, "SIGINT");

@@ -104,6 +104,11 @@ export const invitations = pgTable(
     status: text("status").notNull().default("pending"),
     expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
     inviterId: text("inviter_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+    // SHA-256 of the token in the invitation's link: the link alone admits its holder (signed in with the
+    // invited address), and a copy of the table does not hold the tokens. Re-inviting replaces it.
+    tokenHash: text("token_hash"),
+    // The message that carried the link (mail_outbox), so the members page can say whether it went out.
+    mailId: text("mail_id"),
     createdAt: createdAt(),
   },
   (t) => [
@@ -111,5 +116,6 @@ export const invitations = pgTable(
     index("workspace_invitations_email_idx").on(t.email),
     // At most one pending invitation per address and workspace: inviting again updates it (src/server/data/invitations.ts).
     uniqueIndex("workspace_invitations_pending_idx").on(t.organizationId, t.email).where(sql`${t.status} = 'pending'`),
+    uniqueIndex("workspace_invitations_token_idx").on(t.tokenHash),
   ],
 );

@@ -1,11 +1,13 @@
 "use client";
 // Two to four kits or revisions side by side: a legend naming each item's stroke, the front and top views
 // overlaid, the plots overlaid, and every output and input in one table with each difference from the
-// first item marked better or worse against the targets (or changed where no target judges it).
+// first item marked better or worse against the targets (or changed where no target judges it); and the
+// dimension sheets of the items to download, one each or all in one PDF.
 import Link from "next/link";
 import { useId, useMemo, useState } from "react";
 import type { Comparison } from "@/contracts/compare";
 import type { Change } from "@/contracts/targets";
+import { CompareSheets } from "@/editor/compare/compare-sheets";
 import { inputRows, outputRows, type CompareCell, type CompareRow } from "@/editor/compare/compare-rows";
 import { OverlayPlots } from "@/editor/compare/overlay-plots";
 import { ITEM_STYLES, itemLetter, OverlayView, type OverlaySteer } from "@/editor/compare/overlay-view";
@@ -126,6 +128,7 @@ export function ComparePanel({ workspaceId, comparison, lengthUnit }: { workspac
           </p>
         ) : null}
       </section>
+      <CompareSheets workspaceId={workspaceId} items={items} lengthUnit={lengthUnit} />
       <fieldset className="flex flex-wrap items-center gap-3 text-sm">
         <legend className="sr-only">How the views are posed</legend>
         <span className="font-medium">Views:</span>
