@@ -59,8 +59,8 @@ export function SearchAnswerView({ search, workspaceId }: { search: SearchView; 
                   <YAxis dataKey="sf" type="number" domain={["auto", "auto"]} name="safety factor" fontSize={11} width={48} label={{ value: "safety factor", angle: -90, position: "insideLeft", fontSize: 11, fill: "#5b5f66" }} />
                   <Tooltip formatter={(v) => (typeof v === "number" ? v.toFixed(2) : v)} />
                   <Legend verticalAlign="top" wrapperStyle={{ fontSize: 11 }} />
-                  <ReferenceLine x={aims.minLockDeg} stroke={SERIES.limit} strokeDasharray="5 4" label={{ value: `lock ≥ ${aims.minLockDeg}°`, position: "insideTopRight", fontSize: 10, fill: SERIES.limit }} />
-                  <ReferenceLine y={aims.minSafetyFactor} stroke={SERIES.limit} strokeDasharray="5 4" label={{ value: `SF ≥ ${aims.minSafetyFactor}`, position: "insideBottomLeft", fontSize: 10, fill: SERIES.limit }} />
+                  <ReferenceLine x={aims.minLockDeg} ifOverflow="extendDomain" stroke={SERIES.limit} strokeDasharray="5 4" label={{ value: `lock ≥ ${aims.minLockDeg}°`, position: "insideTopRight", fontSize: 10, fill: SERIES.limit }} />
+                  <ReferenceLine y={aims.minSafetyFactor} ifOverflow="extendDomain" stroke={SERIES.limit} strokeDasharray="5 4" label={{ value: `SF ≥ ${aims.minSafetyFactor}`, position: "insideBottomLeft", fontSize: 10, fill: SERIES.limit }} />
                   <Scatter name="non-dominated layouts" data={answer.front.map(point)} fill={SERIES.steel} line={{ stroke: SERIES.steel, strokeWidth: 1 }} isAnimationActive={false} />
                   <Scatter name="current layout" data={[point(answer.current)]} fill={SERIES.signal} shape="square" isAnimationActive={false} />
                 </ScatterChart>

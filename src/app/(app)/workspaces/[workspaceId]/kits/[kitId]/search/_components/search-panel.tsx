@@ -36,6 +36,8 @@ export function SearchPanel(props: {
     queryKey: ["searches", kitId],
     queryFn: () => api<{ searches: SearchView[] }>(base).then((r) => r.searches),
     initialData: props.searches,
+    // While one runs, its row's count and status follow it.
+    refetchInterval: (q) => (q.state.data?.some((x) => x.status === "running") ? 2000 : false),
   });
   const shown = useQuery({
     queryKey: ["search", shownId],
