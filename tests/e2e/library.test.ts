@@ -199,7 +199,7 @@ describe("revisions in the editor", () => {
     const variant = await readKit(page.url().split("/").pop()!);
     expect(variant.layout.drive.neckDiameterMm).toBe(4.6);
     await shot(page, "variant-history");
-  });
+  }, 150_000); // four page loads, two saves and a variant: over a minute on a loaded 2-core machine
 
   it("the kit tab sets the kit's own targets; the readouts follow them", async () => {
     const kit = await newKit("Moorcroft targets", TARNWICK_10_BASE);
