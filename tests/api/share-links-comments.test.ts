@@ -22,7 +22,9 @@ import * as commentsRoute from "@/app/api/workspaces/[workspaceId]/kits/[kitId]/
 import * as commentRoute from "@/app/api/workspaces/[workspaceId]/kits/[kitId]/comments/[commentId]/route";
 import * as workspacesRoute from "@/app/api/workspaces/route";
 import { TARNWICK_10_BASE } from "@/contracts/demo-layouts";
-import { COMMENT_LIMIT } from "@/server/http/comment-rate-limit";
+import { COMMENT_RATE } from "@/server/http/rate-limit";
+
+const COMMENT_LIMIT = COMMENT_RATE.max;
 import { noticeRecipients } from "@/server/data/comment-notice";
 import { db } from "@/server/db/client";
 import { kitComments, shareLinks } from "@/server/db/schema";
@@ -374,9 +376,9 @@ describe("comments", () => {
     expect(refused.json.error.code).toBe("rate_limited");
     const retry = Number(refused.headers.get("retry-after"));
     expect(retry).toBeGreaterThanOrEqual(1);
-    expect(retry).toBeLessThanOrEqual(60);
+    expect(retry).toBeLessThanOrEqual(COMMENT_RATE.windowS);
     expect((await post(viewer, 1)).status).toBe(201);
-    // Through a share link the count is per link and address.
+    // Through a share link the count is per client address.
     const { json: made } = await makeLink(editor, { allowComments: true });
     const ip = randomClientIp();
     for (let i = 0; i < COMMENT_LIMIT; i++) expect((await postShared(made.token, { revision: 2, view: "front", xMm: i, yMm: 0, body: "x", authorName: "R" }, ip)).status).toBe(201);

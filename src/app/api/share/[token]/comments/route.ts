@@ -5,7 +5,7 @@ import { createComment, listComments } from "@/server/data/comments";
 import { readSharedKit } from "@/server/data/shared-kit";
 import type { OpenShareLink } from "@/server/data/share-links";
 import { readJson } from "@/server/http/body";
-import { takeCommentAllowance } from "@/server/http/comment-rate-limit";
+import { enforceCommentRate } from "@/server/http/rate-limit";
 import { HttpError } from "@/server/http/errors";
 import { shareRoute } from "@/server/http/route";
 
@@ -28,7 +28,7 @@ export const GET = shareRoute<Params>(async (_req, link) => {
 export const POST = shareRoute<Params>(async (req, link) => {
   requireComments(link);
   const body = await readJson(req, sharedCommentCreateSchema);
-  takeCommentAllowance(`share:${link.id}:${clientAddress(req.headers) ?? "unknown"}`);
+  await enforceCommentRate({ clientAddress: clientAddress(req.headers) });
   const shared = await readSharedKit(link);
   const comment = await createComment(link.workspaceId, link.kitId, { kind: "shared", shareLinkId: link.id, name: body.authorName }, body, READER, shared.revision);
   await noticeCommentPosted(link.workspaceId, { id: link.kitId, name: shared.kitName }, null, comment);

@@ -4,7 +4,7 @@ import { noticeCommentPosted } from "@/server/data/comment-notice";
 import { createComment, listComments } from "@/server/data/comments";
 import { getKit, kitIdOrNotFound } from "@/server/data/kits";
 import { readJson } from "@/server/http/body";
-import { takeCommentAllowance } from "@/server/http/comment-rate-limit";
+import { enforceCommentRate } from "@/server/http/rate-limit";
 import { workspaceRoute } from "@/server/http/route";
 
 type Params = { workspaceId: string; kitId: string };
@@ -19,7 +19,7 @@ export const GET = workspaceRoute<Params, "kit">("kit", "read", async (_req, acc
 export const POST = workspaceRoute<Params, "kit">("kit", "read", async (req, access, params) => {
   const kitId = kitIdOrNotFound(params.kitId);
   const body = await readJson(req, commentCreateSchema);
-  takeCommentAllowance(`user:${access.user.id}`);
+  await enforceCommentRate({ userId: access.user.id });
   const comment = await createComment(access.workspace.id, kitId, { kind: "member", userId: access.user.id, name: access.user.name }, body, readerOf(access));
   const kit = await getKit(access.workspace.id, kitId);
   await noticeCommentPosted(access.workspace.id, { id: kitId, name: kit.name }, access.user.id, comment);
