@@ -20,3 +20,14 @@ export function safeNextPath(next: string | null | undefined, fallback = "/kits"
   if (!next || !next.startsWith("/") || next.startsWith("//") || next.startsWith("/\\")) return fallback;
   return next;
 }
+
+export const forgotPasswordFields = z.object({ email });
+export type ForgotPasswordFields = z.infer<typeof forgotPasswordFields>;
+
+export const resetPasswordFields = z
+  .object({
+    password: z.string().min(8, "At least 8 characters").max(128, "At most 128 characters"),
+    repeat: z.string().min(1, "Repeat the new password"),
+  })
+  .refine((v) => v.password === v.repeat, { message: "The two passwords differ", path: ["repeat"] });
+export type ResetPasswordFields = z.infer<typeof resetPasswordFields>;

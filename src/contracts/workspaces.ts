@@ -19,8 +19,18 @@ export type InvitationCreateBody = z.infer<typeof invitationCreateBody>;
  */
 export type InvitationSent = { email: string; role: string; status: "pending" };
 
+/** Whether the message carrying an invitation's link went out: sent, waiting for a retry, or given up on. */
+export type InvitationMailState = "sent" | "pending" | "failed";
+
 /** A pending invitation as a workspace's admins see it. */
-export type WorkspaceInvitationRow = { id: string; email: string; role: string; invitedBy: string; createdAt: string; expiresAt: string };
+export type WorkspaceInvitationRow = { id: string; email: string; role: string; invitedBy: string; createdAt: string; expiresAt: string; mail: InvitationMailState };
+
+/** The token in an invitation's link (32 random bytes, base64url). Anything else names no invitation. */
+export const invitationTokenParam = z.string().regex(/^[A-Za-z0-9_-]{43}$/);
+export const invitationTokenBody = z.object({ token: z.string({ error: "Token is required" }) }).strict();
+
+/** What the invitation link's page shows before it is accepted. */
+export type InvitationPreview = { workspace: { id: string; name: string }; role: string; invitedBy: string; email: string; expiresAt: string };
 
 /** A pending invitation as the invited person sees it. */
 export type MyInvitationRow = { id: string; workspace: { id: string; name: string }; role: string; invitedBy: string; createdAt: string; expiresAt: string };

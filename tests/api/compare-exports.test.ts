@@ -19,6 +19,7 @@ import type { Layout } from "@/contracts/layout";
 import { answerAnalysisRequest } from "@/editor/readouts/analysis-protocol";
 import { db } from "@/server/db/client";
 import { kitRevisions } from "@/server/db/schema";
+import { kitSlug } from "@/server/exports/kit-export";
 import { call, download, signUp } from "../helpers/api";
 import { addMemberByInvitation } from "../helpers/invitations";
 
@@ -223,6 +224,13 @@ describe("the comparison's sheet", () => {
       at += count;
     }
     expect(at).toBe(pages.length);
+  });
+
+  it("names the file after every item, each kit's name cut between words", () => {
+    expect(kitSlug("Tarnwick 10 — 5.0 mm steel dogbone, long arms", 40)).toBe("tarnwick-10-5-0-mm-steel-dogbone-long");
+    expect(kitSlug("Tarnwick 10 — 5.0 mm steel dogbone", 40)).toBe("tarnwick-10-5-0-mm-steel-dogbone");
+    expect(kitSlug("Supercalifragilisticexpialidocious-corner", 10)).toBe("supercalif");
+    expect(kitSlug("—", 40)).toBe("kit");
   });
 
   it("takes the kit sheet's paper, orientation and unit", async () => {

@@ -13,6 +13,8 @@ import { useEditor, useEditorStore } from "../store/editor-context";
 import { createHandleDragTool, type PointerInput } from "../tools/handle-drag-tool";
 import { nudgeDelta } from "../tools/snapping";
 import { useUnderlays } from "../underlay/underlay-context";
+import { markersOf, useComments } from "../comments/comments-context";
+import { COMMENT_VIEWS, type CommentView } from "@/contracts/sharing";
 import { UnderlayControls } from "../underlay/underlay-controls";
 import { pictureAttrs, pictureToScreen, screenToPicture } from "../underlay/underlay-geometry";
 import { formatLength } from "@/figures/length-unit";
@@ -76,6 +78,15 @@ export function ViewFrame({ id, title, axes, box, handles = [], children, notes 
   const picking = uMode?.kind === "pick" && uMode.view === uView ? uMode : null;
   const moving = uMode?.kind === "move" && uMode.view === uView;
   const moveDrag = useRef<{ from: PlanePoint; start: UnderlayPlacement; last: UnderlayPlacement } | null>(null);
+  // Comments pinned to this view, and picking the point a new one pins to.
+  const comments = useComments();
+  const cView = (COMMENT_VIEWS as readonly string[]).includes(id) ? (id as CommentView) : null;
+  const pinning = comments?.picking && cView ? comments : null;
+  const pinAt = (plane: PlanePoint) => {
+    if (!pinning || !cView) return;
+    pinning.setPending({ view: cView, xMm: Math.round(plane[0] * 100) / 100, yMm: Math.round(plane[1] * 100) / 100 });
+    pinning.setPicking(false);
+  };
 
   const fit = () => size.width > 0 && setUserT(fitBox(box, size.width, size.height, 28));
 
@@ -107,6 +118,17 @@ export function ViewFrame({ id, title, axes, box, handles = [], children, notes 
     return () => window.removeEventListener("keydown", onKey);
   }, [tool, underlays, uView]);
 
+  // Escape also stops picking a point for a comment.
+  const stopPinning = pinning?.setPicking;
+  useEffect(() => {
+    if (!stopPinning) return;
+    const onKey = (e: KeyboardEvent) => {
+      if (e.key === "Escape" && !document.querySelector("dialog[open]")) stopPinning(false);
+    };
+    window.addEventListener("keydown", onKey);
+    return () => window.removeEventListener("keydown", onKey);
+  }, [stopPinning]);
+
   const screenPoints = t ? handles.map((h) => ({ h, at: planeToScreen(t, handlePlanePoint(layout, h)) })) : [];
 
   const hit = (p: ScreenPoint): HandleDef | null => {
@@ -135,6 +157,10 @@ export function ViewFrame({ id, title, axes, box, handles = [], children, notes 
     if (!t || e.button !== 0) return;
     pressBox.current = containerRef.current!.getBoundingClientRect();
     const p = input(e, t);
+    if (pinning) {
+      pinAt(p.plane);
+      return;
+    }
     if (picture && underlays && uView && picking) {
       const at = screenToPicture(picture.placement, t, p.screen);
       underlays.setMode({ kind: "pick", view: uView, points: [...picking.points, at].slice(-2) });
@@ -231,7 +257,7 @@ export function ViewFrame({ id, title, axes, box, handles = [], children, notes 
         data-ox={t ? t.ox.toFixed(2) : undefined}
         data-oy={t ? t.oy.toFixed(2) : undefined}
         className="relative min-h-0 flex-1 touch-none select-none"
-        style={{ cursor: picking ? "crosshair" : moving && cursor === "default" ? "move" : cursor }}
+        style={{ cursor: picking || pinning ? "crosshair" : moving && cursor === "default" ? "move" : cursor }}
         onPointerDown={onPointerDown}
         onPointerMove={onPointerMove}
         onPointerUp={() => end(false)}
@@ -298,6 +324,49 @@ export function ViewFrame({ id, title, axes, box, handles = [], children, notes 
             {/* Its press must not reach the view, where it would pick a point or start a move. */}
             <button type="button" className="rounded border border-ink/20 px-1.5 hover:bg-ink/5" onPointerDown={(e) => e.stopPropagation()} onClick={() => underlays?.setMode({ kind: "idle" })}>
               {picking ? "Stop" : "Done"}
+            </button>
+          </div>
+        ) : null}
+        {t && comments && cView
+          ? markersOf(comments, cView).map((th) => {
+              const [x, y] = planeToScreen(t, [th.xMm, th.yMm]);
+              const n = comments.numberOf(th.id);
+              const on = comments.selected === th.id;
+              return (
+                <button
+                  key={th.id}
+                  type="button"
+                  data-comment-marker={n}
+                  aria-label={`Comment ${n} by ${th.authorName}${th.resolvedAt ? ", resolved" : ""}`}
+                  aria-pressed={on}
+                  className={`absolute flex h-5 min-w-5 -translate-x-1/2 -translate-y-full items-center justify-center rounded-full rounded-bl-none border px-1 text-[11px] font-semibold shadow focus-visible:outline-2 focus-visible:outline-offset-2 focus-visible:outline-blue-700 ${th.resolvedAt ? "border-ink/40 bg-white text-ink" : on ? "border-amber-900 bg-amber-300 text-ink" : "border-amber-800 bg-amber-100 text-ink"}`}
+                  style={{ left: x, top: y }}
+                  onPointerDown={(e) => e.stopPropagation()}
+                  onClick={() => comments.select(th.id)}
+                >
+                  {n}
+                </button>
+              );
+            })
+          : null}
+        {t && comments?.pending && comments.pending.view === cView ? (
+          <span
+            aria-hidden="true"
+            data-testid="comment-pending-pin"
+            className="pointer-events-none absolute flex h-5 w-5 -translate-x-1/2 -translate-y-full items-center justify-center rounded-full rounded-bl-none border border-blue-800 bg-blue-100 text-[11px] font-semibold text-ink shadow"
+            style={{ left: planeToScreen(t, [comments.pending.xMm, comments.pending.yMm])[0], top: planeToScreen(t, [comments.pending.xMm, comments.pending.yMm])[1] }}
+          >
+            +
+          </span>
+        ) : null}
+        {pinning && t ? (
+          <div className="absolute left-2 top-1.5 flex items-center gap-2 rounded bg-white/90 px-1.5 py-0.5 text-xs text-ink shadow">
+            <p role="status" data-testid={`comment-hint-${id}`}>Click the point to comment on</p>
+            <button type="button" className="rounded border border-ink/20 px-1.5 hover:bg-ink/5" onPointerDown={(e) => e.stopPropagation()} onClick={() => pinAt(screenToPlane(t, [size.width / 2, size.height / 2]))}>
+              Pin at the centre
+            </button>
+            <button type="button" className="rounded border border-ink/20 px-1.5 hover:bg-ink/5" onPointerDown={(e) => e.stopPropagation()} onClick={() => pinning.setPicking(false)}>
+              Stop
             </button>
           </div>
         ) : null}

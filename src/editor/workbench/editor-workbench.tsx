@@ -23,7 +23,11 @@ function Handle({ label, orientation }: { label: string; orientation: "horizonta
   return <Separator aria-label={label} className={`${bar} shrink-0 rounded bg-transparent hover:bg-steel/30 focus-visible:bg-steel/50 focus-visible:outline-none data-[separator=active]:bg-steel/50`} />;
 }
 
-export function EditorWorkbench({ plots = <EditorPlots />, sideTabs = [] }: { plots?: ReactNode; sideTabs?: readonly TabDef[] }) {
+/**
+ * `header` replaces the editing toolbar and `properties={false}` leaves out the properties tab: the shared
+ * page shows the drawing, readouts and plots with no edit control.
+ */
+export function EditorWorkbench({ plots = <EditorPlots />, sideTabs = [], header, properties = true }: { plots?: ReactNode; sideTabs?: readonly TabDef[]; header?: ReactNode; properties?: boolean }) {
   const store = useEditorStore();
   useLiveAnalysis(store);
   const save = useCallback(() => {
@@ -33,13 +37,13 @@ export function EditorWorkbench({ plots = <EditorPlots />, sideTabs = [] }: { pl
 
   const tabs: TabDef[] = [
     { id: "readouts", label: "Readouts", content: () => <ReadoutsPanel /> },
-    { id: "properties", label: "Properties", content: () => <PropertyPanel /> },
+    ...(properties ? [{ id: "properties", label: "Properties", content: () => <PropertyPanel /> }] : []),
     ...sideTabs,
   ];
 
   return (
     <div data-editor className="flex min-h-0 flex-1 flex-col bg-paper">
-      <EditorToolbar onSave={save} />
+      {header ?? <EditorToolbar onSave={save} />}
       <PreviewControls />
       <Group orientation="horizontal" className="min-h-0 flex-1 p-1.5">
         <Panel id="drawings" defaultSize="68" minSize="40">

@@ -8,6 +8,8 @@ import * as schema from "../db/schema";
 import { authSecret, env, trustedOrigins } from "../env";
 import { createPersonalWorkspace } from "../data/workspaces";
 import { CLIENT_ADDRESS_HEADER } from "../http/client-address";
+import { consumeRate, RESET_MAIL_RATE, VERIFY_MAIL_RATE } from "../http/rate-limit";
+import { ensureOutboxWorker, queueMail, resetPasswordMail, verifyAddressMail } from "../mail";
 import { ac, roles } from "./access";
 
 /**
@@ -41,7 +43,33 @@ export const auth = betterAuth({
       invitation: schema.invitations,
     },
   }),
-  emailAndPassword: { enabled: true, minPasswordLength: 8, maxPasswordLength: 128, autoSignIn: true },
+  // Sign-up signs in at once and sends a link confirming the address; what the address grants (accepting an
+  // invitation from the list, src/server/data/invitations.ts) waits for that confirmation.
+  emailAndPassword: {
+    enabled: true,
+    minPasswordLength: 8,
+    maxPasswordLength: 128,
+    autoSignIn: true,
+    resetPasswordTokenExpiresIn: 60 * 60,
+    revokeSessionsOnPasswordReset: true,
+    // The answer to a reset request is the same for any address; past the per-account limit the message
+    // is quietly not sent, so nobody can flood someone's mailbox through it.
+    sendResetPassword: async ({ user, url }) => {
+      if (!(await consumeRate(RESET_MAIL_RATE, user.id)).allowed) return;
+      await queueMail({ to: user.email, ...resetPasswordMail({ name: user.name, url: withCallback(url, "/reset-password") }) });
+    },
+  },
+  emailVerification: {
+    sendOnSignUp: true,
+    autoSignInAfterVerification: true,
+    expiresIn: 60 * 60 * 24,
+    sendVerificationEmail: async ({ user, url }, request) => {
+      // A sign-up made by server code (the demo seed) has no request and confirms its address itself.
+      if (!request) return;
+      if (!(await consumeRate(VERIFY_MAIL_RATE, user.id)).allowed) return;
+      await queueMail({ to: user.email, ...verifyAddressMail({ name: user.name, url: withCallback(url, "/") }) });
+    },
+  },
   // No signed cookie cache: it would let a signed-out session be replayed for its whole max-age. The guard's
   // short per-instance memo (src/server/data/guard.ts) saves the database read instead.
   session: { expiresIn: 60 * 60 * 24 * 14, updateAge: 60 * 60 * 24 },
@@ -57,6 +85,9 @@ export const auth = betterAuth({
     customRules: {
       "/sign-in/email": { window: 60, max: 10 },
       "/sign-up/email": { window: 60, max: 10 },
+      "/request-password-reset": { window: 60, max: 5 },
+      "/reset-password": { window: 60, max: 10 },
+      "/send-verification-email": { window: 60, max: 5 },
     },
   },
   plugins: [
@@ -79,5 +110,15 @@ export const auth = betterAuth({
     },
   },
 });
+
+/** better-auth's link with a callback page, so following it lands on a page rather than a JSON answer. */
+function withCallback(url: string, callback: string): string {
+  const link = new URL(url);
+  if (!link.searchParams.get("callbackURL")) link.searchParams.set("callbackURL", callback);
+  return link.toString();
+}
+
+// Messages left waiting by a restart or an SMTP outage go out once this instance serves anything signed in.
+ensureOutboxWorker();
 
 export type AuthSession = typeof auth.$Infer.Session;

@@ -61,7 +61,7 @@ export async function loadKitEditor(access: WorkspaceAccess, rawKitId: string, r
 }
 
 /** The analysis to render with the page; null when it cannot be made now (the browser then computes it). */
-async function serverFigures(layout: Layout): Promise<AnalysisResult | null> {
+export async function serverFigures(layout: Layout): Promise<AnalysisResult | null> {
   try {
     const outcome = await runAnalysis({ layout, grid: FULL_FIGURES_GRID });
     return outcome.ok ? (JSON.parse(outcome.json) as { analysis: AnalysisResult }).analysis : null;

@@ -10,7 +10,7 @@ import { sheetPdf } from "./sheet-pdf";
 
 /** "compare-{kit}-rev{n}-{kit}-rev{m}-sheet.pdf": every item named, each kit's part kept short. */
 export function compareSheetName(kits: readonly ExportKit[]): string {
-  return `compare-${kits.map((k) => `${kitSlug(k.meta.kitName, 30)}-${revisionSlug(k.meta)}`).join("-")}-sheet.pdf`;
+  return `compare-${kits.map((k) => `${kitSlug(k.meta.kitName, 40)}-${revisionSlug(k.meta)}`).join("-")}-sheet.pdf`;
 }
 
 /** The combined sheet of the items in the caller's workspace (404 for a kit of another one, or a revision not there). */

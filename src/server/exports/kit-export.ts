@@ -21,9 +21,13 @@ const TYPES: Record<string, string> = {
   svg: "image/svg+xml; charset=utf-8",
 };
 
-/** A kit's name as a file name: lower-case letters, digits and dashes. */
+/** A kit's name as a file name: lower-case letters, digits and dashes, at most `max` long, cut between words. */
 export function kitSlug(kitName: string, max = 60): string {
-  return kitName.normalize("NFKD").toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-+|-+$/g, "").slice(0, max).replace(/-+$/, "") || "kit";
+  const slug = kitName.normalize("NFKD").toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-+|-+$/g, "");
+  if (slug.length <= max) return slug || "kit";
+  const cut = slug.slice(0, max + 1);
+  // A word cut in two reads as another word; a single word longer than `max` is cut where it must be.
+  return (cut.lastIndexOf("-") > 0 ? cut.slice(0, cut.lastIndexOf("-")) : slug.slice(0, max)).replace(/-+$/, "");
 }
 
 /** The revision as a file name's part: "rev2". */

@@ -2,7 +2,8 @@
 // in the browser): sign up or sign in, call the API with the session, open a page already signed in.
 import { randomUUID } from "node:crypto";
 import type { Page } from "playwright-core";
-import { baseUrl, type BrowserHarness } from "./browser";
+import { linkIn, waitForMail } from "../../helpers/mail";
+import { baseUrl, randomClientIp, type BrowserHarness } from "./browser";
 
 export type Account = { name: string; email: string; cookies: { name: string; value: string }[] };
 
@@ -14,8 +15,9 @@ function cookiesOf(res: Response): Account["cookies"] {
   });
 }
 
-async function authPost(path: string, body: unknown): Promise<Response> {
-  return fetch(`${baseUrl}${path}`, { method: "POST", headers: { "content-type": "application/json", origin: baseUrl }, body: JSON.stringify(body) });
+/** A POST to an auth route from a client address of its own (the test app trusts one proxy hop). */
+export async function authPost(path: string, body: unknown): Promise<Response> {
+  return fetch(`${baseUrl}${path}`, { method: "POST", headers: { "content-type": "application/json", origin: baseUrl, "x-forwarded-for": randomClientIp() }, body: JSON.stringify(body) });
 }
 
 export async function signUpByApi(name: string, password = "steer-lock-42"): Promise<Account> {
@@ -52,8 +54,20 @@ export async function addMemberByInvitation(owner: Account, workspaceId: string,
   const { invitations } = await apiAs<{ invitations: { id: string; workspace: { id: string } }[] }>(account, "/api/me/invitations");
   const invitation = invitations.find((i) => i.workspace.id === workspaceId);
   if (!invitation) throw new Error(`no open invitation for ${account.email} to ${workspaceId}`);
+  // Accepting from the list needs a confirmed address: the message's link, followed as a person would.
+  await confirmByMail(account);
   await apiAs(account, `/api/me/invitations/${invitation.id}/accept`, { method: "POST" });
 }
+
+/** Follows the confirmation link of the sign-up message in the local mail catcher (once per account). */
+export async function confirmByMail(account: Account): Promise<void> {
+  if (confirmed.has(account.email)) return;
+  const mail = await waitForMail(account.email, /Confirm your e-mail address/);
+  const res = await fetch(linkIn(mail, `${baseUrl}/api/auth/verify-email?`), { redirect: "manual", headers: { "x-forwarded-for": randomClientIp() } });
+  if (res.status !== 302) throw new Error(`confirming ${account.email} answered ${res.status}`);
+  confirmed.add(account.email);
+}
+const confirmed = new Set<string>();
 
 export async function pageAs(browser: BrowserHarness, account: Account, viewport?: { width: number; height: number }): Promise<Page> {
   const page = await browser.newPage(viewport);

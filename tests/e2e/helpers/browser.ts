@@ -13,6 +13,12 @@ import { chromiumLaunchOptions } from "../../../scripts/lib/chromium";
 
 export const baseUrl = process.env.E2E_BASE_URL ?? "http://127.0.0.1:3100";
 
+/** A made-up client address (TEST-NET-2 range), as a proxy in front of the app would forward it. */
+export function randomClientIp(): string {
+  const b = () => Math.floor(Math.random() * 254) + 1;
+  return `198.18.${b()}.${b()}`;
+}
+
 const shotsDir = fileURLToPath(new URL("../../../.data/e2e-shots", import.meta.url));
 
 export interface BrowserHarness {
@@ -47,7 +53,9 @@ export function setUpBrowser(): BrowserHarness {
   return {
     async newPage(viewport) {
       browser ??= await chromium.launch(chromiumLaunchOptions);
-      const context = await browser.newContext({ baseURL: baseUrl, ...(viewport ? { viewport } : {}) });
+      // A client address of its own per page (the test app trusts one proxy hop), so the auth rate limits
+      // count each page apart, as they would count different people.
+      const context = await browser.newContext({ baseURL: baseUrl, extraHTTPHeaders: { "x-forwarded-for": randomClientIp() }, ...(viewport ? { viewport } : {}) });
       contexts.push(context);
       return context.newPage();
     },

@@ -34,6 +34,9 @@ export function SignInForm({ next }: { next?: string }) {
       <TextField id="password" label="Password" type="password" autoComplete="current-password" error={formState.errors.password?.message} {...register("password")} />
       <Button type="submit" busy={formState.isSubmitting}>Sign in</Button>
       <p className="text-sm text-ink-muted">
+        <Link className="font-medium text-steel underline" href="/forgot-password">Forgot your password?</Link>
+      </p>
+      <p className="text-sm text-ink-muted">
         New here? <Link className="font-medium text-steel underline" href={next ? `/sign-up?next=${encodeURIComponent(next)}` : "/sign-up"}>Create an account</Link>
       </p>
     </form>

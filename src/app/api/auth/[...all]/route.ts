@@ -3,6 +3,7 @@ import { auth } from "@/server/auth/auth";
 import { forgetCachedSession } from "@/server/data/guard";
 import { withClientAddress } from "@/server/http/client-address";
 import { errorResponse, notFound } from "@/server/http/errors";
+import { tooManyRequests } from "@/server/http/rate-limit";
 import { toErrorResponse } from "@/server/http/route";
 
 const handler = toNextJsHandler(auth);
@@ -20,10 +21,22 @@ function isOrganizationEndpoint(req: Request): boolean {
 
 const hidden = () => errorResponse(notFound("That endpoint"));
 
+/**
+ * better-auth's 429 carries only X-Retry-After and a vague message: answered as every rate limit of the app
+ * answers (a message saying what and when, and the standard Retry-After header).
+ */
+function rateLimited(res: Response, req: Request): Response {
+  const retryAfter = Math.max(1, Number(res.headers.get("x-retry-after")) || 60);
+  const path = new URL(req.url).pathname;
+  const what = path.includes("sign-up") ? "sign-up attempts" : path.includes("sign-in") ? "sign-in attempts" : path.includes("password") ? "password reset requests" : path.includes("verif") ? "confirmation requests" : "requests";
+  return errorResponse(tooManyRequests(what, retryAfter));
+}
+
 /** better-auth lets a database error through (its rate limiter reads PostgreSQL first): answered as every route answers it. */
 async function answered(req: Request, run: () => Promise<Response>): Promise<Response> {
   try {
-    return await run();
+    const res = await run();
+    return res.status === 429 ? rateLimited(res, req) : res;
   } catch (error) {
     return toErrorResponse(error, req);
   }

@@ -109,7 +109,7 @@ function InviteForm({ workspaceId, roles }: { workspaceId: string; roles: readon
     <aside className="h-fit rounded-lg border border-ink/10 bg-white p-4">
       <form onSubmit={handleSubmit((v) => send.mutate(v))} noValidate className="flex flex-col gap-3" aria-label="Invite someone">
         <h2 className="font-semibold">Invite someone</h2>
-        <p className="text-xs text-ink-muted">They join once they sign in with this address and accept. An invitation stays open for 7 days.</p>
+        <p className="text-xs text-ink-muted">We e-mail the address a link; they join once they follow it and sign in (or sign up) with this address. The link works once, for 7 days; inviting again sends a new one.</p>
         {send.isError && !(send.error instanceof ApiError && send.error.fields.length) ? <ErrorNotice title="Could not invite" message={send.error.message} /> : null}
         {send.isSuccess ? (
           <p role="status" className="rounded-md border border-ink/10 bg-paper px-3 py-2 text-sm">
@@ -125,6 +125,12 @@ function InviteForm({ workspaceId, roles }: { workspaceId: string; roles: readon
     </aside>
   );
 }
+
+const MAIL_WORDS: Record<WorkspaceInvitationRow["mail"], string> = {
+  sent: "Message sent",
+  pending: "Message not sent yet: retrying",
+  failed: "The message could not be sent: invite the address again to retry",
+};
 
 const dateFormat = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "short", year: "numeric" });
 
@@ -156,6 +162,7 @@ function PendingInvitations({ workspaceId, myRole }: { workspaceId: string; myRo
               <div className="min-w-0">
                 <p className="truncate font-medium" title={inv.email}>{inv.email}</p>
                 <p className="text-xs text-ink-muted">{inv.role} · invited by {inv.invitedBy} · open until {dateFormat.format(new Date(inv.expiresAt))}</p>
+                <p className={`text-xs ${inv.mail === "failed" ? "font-medium text-red-700" : "text-ink-muted"}`}>{MAIL_WORDS[inv.mail]}</p>
               </div>
               {inv.role !== "owner" || myRole === "owner" ? (
                 <Button variant="ghost" onClick={() => revoke.mutate(inv.id)} disabled={revoke.isPending} aria-label={`Withdraw the invitation to ${inv.email}`}>Withdraw</Button>

@@ -13,6 +13,11 @@ import { ShelfTab } from "@/editor/library/shelf-tab";
 import { TestLogTab } from "@/editor/test-log/test-log-tab";
 import { UnderlayProvider } from "@/editor/underlay/underlay-context";
 import { EditorWorkbench } from "@/editor/workbench/editor-workbench";
+import { CommentsPanel } from "@/editor/comments/comments-panel";
+import { CommentsProvider, type CommentSource } from "@/editor/comments/comments-context";
+import { ShareLinksPanel } from "@/editor/sharing/share-links-panel";
+import { queryKeys } from "@/lib/query-keys";
+import { useMemo } from "react";
 import { AnalysisSheet } from "./analysis-sheet";
 
 function LiveSheet() {
@@ -28,19 +33,31 @@ const SIDE_TABS = [
   { id: "kit", label: "Kit & targets", content: () => <KitDetailsPanel /> },
   { id: "shelf", label: "Shelf", content: () => <ShelfTab /> },
   { id: "test-log", label: "Test log", content: () => <TestLogTab /> },
+  { id: "comments", label: "Comments", content: () => <CommentsPanel /> },
 ];
+// Share links are the editors' to make: the tab is there for them only (the server checks the role too).
+const EDITOR_TABS = [...SIDE_TABS, { id: "share", label: "Share", content: () => <ShareLinksPanel /> }];
 
 export function KitEditor({ init, library, fromSearch = null }: { init: EditorInit; library: KitLibraryInit; fromSearch?: SearchResultOrigin | null }) {
+  const { workspaceId, kitId } = init.kit;
+  const comments = useMemo<CommentSource>(() => {
+    const base = `/api/workspaces/${workspaceId}/kits/${kitId}/comments`;
+    return { key: queryKeys.comments(workspaceId, kitId), listUrl: base, itemUrl: (id) => `${base}/${id}`, needsName: false };
+  }, [workspaceId, kitId]);
+  // Comments pin to the revision shown: an earlier one, or the head as the page opened it.
+  const revision = library.viewing?.revision ?? init.kit.headRevision ?? 1;
   return (
     <EditorProvider init={init}>
       <KitLibraryProvider init={library}>
         {/* Reference pictures belong to the kit, not to a revision: the same under every revision shown. */}
         <UnderlayProvider workspaceId={init.kit.workspaceId} kitId={init.kit.kitId} canWrite={library.canWrite}>
-          <div className="flex min-h-0 flex-1 flex-col">
-            <RevisionBanner />
-            <SearchResultBanner origin={fromSearch} />
-            <EditorWorkbench sideTabs={SIDE_TABS} />
-          </div>
+          <CommentsProvider source={comments} revision={revision}>
+            <div className="flex min-h-0 flex-1 flex-col">
+              <RevisionBanner />
+              <SearchResultBanner origin={fromSearch} />
+              <EditorWorkbench sideTabs={library.canWrite ? EDITOR_TABS : SIDE_TABS} />
+            </div>
+          </CommentsProvider>
         </UnderlayProvider>
       </KitLibraryProvider>
     </EditorProvider>
