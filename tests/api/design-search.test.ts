@@ -105,8 +105,10 @@ describe("a design search", () => {
       expect(verdicts).toEqual({ lockDeg: "meets", maxJointAngleDeg: "meets", ackermannPct: "meets", safetyFactor: "meets", neckClearanceMm: "meets" });
       expect(s.lockDeg).toBeGreaterThan(before.lockDeg + 5);
     }
-    // The front: no layout on it has both less lock and less safety factor than another on it.
-    expect(answer.front.length).toBeGreaterThanOrEqual(2);
+    // The front: no layout on it has both less lock and less safety factor than another on it (one layout can
+    // beat all the others on both: the front is then that one), and it reaches at least the best layout's lock.
+    expect(answer.front.length).toBeGreaterThanOrEqual(1);
+    expect(Math.max(...answer.front.map((c) => c.readouts.lockDeg!))).toBeGreaterThanOrEqual(answer.best[0]!.readouts.lockDeg! - 1e-9);
     for (const a of answer.front) for (const b of answer.front) if (a !== b) expect(b.readouts.lockDeg! >= a.readouts.lockDeg! && b.readouts.safetyFactor! > a.readouts.safetyFactor!).toBe(false);
     // Viewers read it; the list names it.
     expect((await read(done.id, viewer)).json.search.answer.outcome).toBe("met");
