@@ -89,3 +89,11 @@ export const compareSheetQuery = z.strictObject({
   ...sheetOptions,
 });
 export type CompareSheetQuery = z.infer<typeof compareSheetQuery>;
+
+/**
+ * The query of one export through a share link: the same, without `revision` (a link shows its own
+ * revision, so a `revision` parameter is refused as unknown, naming it, rather than silently ignored).
+ */
+export function sharedExportQuerySchema(file: ExportFile): z.ZodType<ExportQuery> {
+  return (exportQuerySchema(file) as z.ZodObject<{ revision: typeof revision }>).omit({ revision: true });
+}

@@ -184,6 +184,10 @@ describe("reading through a share link, anonymously", () => {
     const bad = await sharedFile(made.token, "sheet.pdf", "?paper=a3");
     expect(bad.status).toBe(422);
     expect(bad.json.error.fields[0].path).toBe("paper");
+    // A link shows its own revision: asking for another is refused, naming the parameter, not ignored.
+    const other = await sharedFile(made.token, "sheet.pdf", "?revision=2");
+    expect(other.status).toBe(422);
+    expect(JSON.stringify(other.json.error)).toContain("revision");
   });
 });
 

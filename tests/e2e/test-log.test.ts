@@ -190,7 +190,7 @@ describe("calibration", () => {
     await viewerPage.goto(`/workspaces/${demo}/calibration`);
     await viewerPage.getByTestId("calibration-plot").first().waitFor();
     expect(await viewerPage.getByRole("button", { name: "Apply to the shelf material" }).count()).toBe(0);
-  });
+  }, 150_000); // the calibration page draws every demo run: over a minute on a loaded 2-core machine
 });
 
 describe("an underlay under the front view", () => {

@@ -1,4 +1,4 @@
-import { exportQuerySchema, isExportFile } from "@/contracts/exports";
+import { isExportFile, sharedExportQuerySchema } from "@/contracts/exports";
 import { readSharedKit } from "@/server/data/shared-kit";
 import { layoutExportResponse } from "@/server/exports/kit-export";
 import { notFound } from "@/server/http/errors";
@@ -11,7 +11,7 @@ type Params = { token: string; file: string };
 // a reviewer has no preferences), the DXF always 1:1 in mm.
 export const GET = shareRoute<Params>(async (req, link, params) => {
   if (!isExportFile(params.file)) throw notFound("Export");
-  const query = readQuery(req, exportQuerySchema(params.file));
+  const query = readQuery(req, sharedExportQuerySchema(params.file));
   const shared = await readSharedKit(link);
   return layoutExportResponse(params.file, query, query.unit ?? "mm", shared.layout, shared.meta);
 });
