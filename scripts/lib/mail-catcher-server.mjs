@@ -111,6 +111,10 @@ const api = createServer(async (req, res) => {
   }
 });
 
+// A client that drops its connection (a reset mid-session) is that session's end, not the catcher's: without
+// a listener smtp-server's "error" event would end the process and every later message would be lost.
+smtp.on("error", (error) => console.warn(`mail catcher: a session ended with ${error.code ?? error.message}`));
+
 await new Promise((resolve) => smtp.listen(smtpPort, "127.0.0.1", resolve));
 await new Promise((resolve) => api.listen(apiPort, "127.0.0.1", resolve));
 console.log(`mail catcher: SMTP on 127.0.0.1:${smtpPort}, API on http://127.0.0.1:${apiPort}, data in ${directory}`);
