@@ -15,13 +15,16 @@ export function worseWheel(pose: CornerPose): "left" | "right" {
   return pose.right.jointAngleDeg > pose.left.jointAngleDeg ? "right" : "left";
 }
 
-export function previewBinding(pose: CornerPose, layout: Layout, analysis: AnalysisResult | null): PreviewBinding {
+/** The joint's limit and what sets it, as the analysis gives them (null before there is one). */
+export type JointLimit = Pick<AnalysisResult["drive"], "jointLimitDeg" | "jointLimitBy">;
+
+export function previewBinding(pose: CornerPose, layout: Layout, joint: JointLimit | null): PreviewBinding {
   for (const wheel of ["left", "right"] as const) if (!pose[wheel].steerSolved) return { kind: "tie-rod", wheel };
-  if (analysis) {
+  if (joint) {
     const wheel = worseWheel(pose);
     const angle = pose[wheel].jointAngleDeg;
-    const limit = analysis.drive.jointLimitDeg;
-    if (angle >= limit - 1e-9) return { kind: "joint", wheel, angleDeg: angle, limitDeg: limit, by: analysis.drive.jointLimitBy };
+    const limit = joint.jointLimitDeg;
+    if (angle >= limit - 1e-9) return { kind: "joint", wheel, angleDeg: angle, limitDeg: limit, by: joint.jointLimitBy };
   }
   if (Math.abs(Math.abs(pose.steerInput) - steerInputTravel(layout)) < 1e-9 && pose.steerInput !== 0) return { kind: "input-end", input: layout.topView.steeringInput.kind };
   return { kind: "none" };
