@@ -112,7 +112,7 @@ const fx = {
   /** The derate the material's calibration proposes (what a person applying it would send). */
   derate: 0.6,
   // Current versions, read again before each write so a body can be one the route accepts.
-  versions: { kit: 1, kit2: 1, material: 1, run: 1, underlay: 1, targets: 1 },
+  versions: { kit: 1, kit2: 1, material: 1, run: 1, underlay: 1, targets: 1, kitHead: 1 },
 };
 
 function realValues(segment: string): string[] {
@@ -300,7 +300,8 @@ const TEMPLATES: Record<string, Template[]> = {
   "POST /api/analyze": [() => ({ layout, grid: { travelSteps: 5, steerSteps: 7 } }), () => ({ layout: schema1Layout, grid: { travelSteps: 3, steerSteps: 5 } })],
   "POST /api/invitations/accept": [() => ({ token: fx.invitationToken })],
   "PUT /api/me/preferences": [() => ({ lengthUnit: "in" })],
-  "POST /api/share/[token]/comments": [() => ({ body: "Looks right", authorName: "Reviewer", ...pin }), () => ({ body: "Agreed", authorName: "Second reviewer", parentId: fx.comment })],
+  // A comment through a link is pinned to the revision the link shows (the kit's head for the first link).
+  "POST /api/share/[token]/comments": [() => ({ body: "Looks right", authorName: "Reviewer", ...pin, revision: live("kitHead") }), () => ({ body: "Agreed", authorName: "Second reviewer", parentId: fx.comment })],
   "POST /api/workspaces": [() => ({ name: "Fuzzed club" })],
   "POST /api/workspaces/[workspaceId]/calibration/[materialId]": [() => ({ version: live("material"), runs: 5, derate: live("derate"), kits: [{ id: fx.kit2, version: live("kit2") }] })],
   "POST /api/workspaces/[workspaceId]/kits": [() => ({ name: "Fuzzed kit", scale: "1:10", notes: "n", tags: ["fuzz"], layout }), () => ({ name: "Old kit", scale: "1:8", layout: schema1Layout })],
@@ -571,15 +572,16 @@ async function send(h: FoundHandler, c: Case): Promise<{ status: number; text: s
 
 async function refreshVersions(): Promise<void> {
   const one = async <T>(q: Promise<{ v: T }[]>) => (await q)[0]?.v;
-  const [kit, kit2, material, run, underlay, targets] = await Promise.all([
+  const [kit, kit2, material, run, underlay, targets, kitHead] = await Promise.all([
     one(db.select({ v: kits.version }).from(kits).where(eq(kits.id, fx.kit))),
     one(db.select({ v: kits.version }).from(kits).where(eq(kits.id, fx.kit2))),
     one(db.select({ v: shelfItems.version }).from(shelfItems).where(eq(shelfItems.id, fx.material))),
     one(db.select({ v: testRuns.version }).from(testRuns).where(eq(testRuns.id, fx.run))),
     one(db.select({ v: kitUnderlays.version }).from(kitUnderlays).where(and(eq(kitUnderlays.kitId, fx.kit), eq(kitUnderlays.view, "front")))),
     one(db.select({ v: workspaceSettings.version }).from(workspaceSettings).where(eq(workspaceSettings.workspaceId, fx.ws))),
+    one(db.select({ v: kits.headRevision }).from(kits).where(eq(kits.id, fx.kit))),
   ]);
-  fx.versions = { kit: kit ?? 1, kit2: kit2 ?? 1, material: material ?? 1, run: run ?? 1, underlay: underlay ?? 1, targets: targets ?? 1 };
+  fx.versions = { kit: kit ?? 1, kit2: kit2 ?? 1, material: material ?? 1, run: run ?? 1, underlay: underlay ?? 1, targets: targets ?? 1, kitHead: kitHead ?? 1 };
 }
 
 /** Cancels the searches this file started (all but the one kept running for the routes to read, unless `all`). */
