@@ -2,6 +2,7 @@ import { z } from "zod";
 import type { SteerLimitReason } from "@/engine";
 import { KIT_SCALES, kitTag, type KitSummary } from "./kits";
 import { READOUT_KEYS, type ReadoutKey, type Targets } from "./targets";
+import { isStorableText } from "./text";
 
 // The library table's query: GET /api/workspaces/{w}/kits?… Every parameter optional; the page, the order and
 // the filters are all decided on the server, so a page of 50 out of thousands costs one indexed query.
@@ -28,11 +29,21 @@ const bound = (field: string) =>
     .refine(Number.isFinite, `${field} must be a number`)
     .refine((n) => Math.abs(n) <= 1e6, `${field} must be between -1000000 and 1000000`);
 
+// The moments a date filter may name: PostgreSQL has no year 0, and the end of 9999-12-31 (the next day, which
+// a bare "to" date reaches up to) is past the timestamps it reads back from JavaScript.
+const EARLIEST_DAY = "0001-01-01";
+const LATEST_DAY = "9999-12-30";
+const inDayRange = (s: string) => {
+  const t = Date.parse(s);
+  return t >= Date.parse(`${EARLIEST_DAY}T00:00:00Z`) && t < Date.parse(`${LATEST_DAY}T00:00:00Z`) + 86_400_000;
+};
+
 const day = (field: string) =>
   z
     .string()
     .regex(/^\d{4}-\d{2}-\d{2}(T[\d:.]+(Z|[+-]\d{2}:\d{2})?)?$/, `${field} must be a date (YYYY-MM-DD)`)
-    .refine((s) => !Number.isNaN(Date.parse(s)), `${field} must be a real date`);
+    .refine((s) => !Number.isNaN(Date.parse(s)), `${field} must be a real date`)
+    .refine(inDayRange, `${field} must be between ${EARLIEST_DAY} and ${LATEST_DAY}`);
 
 const rangeFields = Object.fromEntries(
   READOUT_KEYS.flatMap((k) => [
@@ -43,7 +54,8 @@ const rangeFields = Object.fromEntries(
 
 export const libraryQuerySchema = z
   .strictObject({
-    q: z.string().trim().max(120, "q must be at most 120 characters").optional(),
+    // PostgreSQL refuses U+0000 in a pattern, and no name or tag holds a control character to find.
+    q: z.string().trim().max(120, "q must be at most 120 characters").refine((s) => isStorableText(s), "q must not contain control characters").optional(),
     scale: csv(z.enum(KIT_SCALES, { error: `scale must be among ${KIT_SCALES.join(", ")}` }), "scale").optional(),
     tags: csv(kitTag, "tags", 12).optional(),
     author: z.string().regex(/^[A-Za-z0-9_-]{1,64}$/, "author must be a user id").optional(),

@@ -182,6 +182,26 @@ describe("bad queries and tags are refused with the parameter named", () => {
     expect(res.json.error!.fields[0]!.path).toBe(path);
   });
 
+  // Found by tests/api/fuzz-every-route.test.ts: each reached PostgreSQL, which refused it, and the answer was a 500.
+  it.each([
+    ["q=%00", "q", /control characters/],
+    ["q=neck%00", "q", /control characters/],
+    ["updatedFrom=0000-01-01", "updatedFrom", /between 0001-01-01 and 9999-12-30/],
+    ["updatedTo=0000-01-01", "updatedTo", /between 0001-01-01 and 9999-12-30/],
+    ["updatedTo=9999-12-31", "updatedTo", /between 0001-01-01 and 9999-12-30/],
+    ["updatedFrom=0001-01-01T00:00:00%2B01:00", "updatedFrom", /between 0001-01-01 and 9999-12-30/],
+  ])("%s → 422 naming %s, not a 500 from the database", async (query, path, message) => {
+    const res = await list(query);
+    expect(res.status).toBe(422);
+    expect(res.json.error!.fields[0]).toMatchObject({ path, message: expect.stringMatching(message) });
+  });
+
+  it("the widest dates it takes still answer", async () => {
+    const res = await list("updatedFrom=0001-01-01&updatedTo=9999-12-30");
+    expect(res.status).toBe(200);
+    expect(res.json.total).toBe(7);
+  });
+
   it("a tag with a control character, or more than 12 tags, is refused when written", async () => {
     const id = ids["Elm printed"]!;
     const bad = await call(kitRoute.PATCH, "PATCH", `/api/workspaces/${ws}/kits/${id}`, { workspaceId: ws, kitId: id }, { cookie: owner.cookie, body: { version: 1, tags: ["ok", "bad\u0007"] } });
