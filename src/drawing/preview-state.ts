@@ -15,16 +15,13 @@ export function worseWheel(pose: CornerPose): "left" | "right" {
   return pose.right.jointAngleDeg > pose.left.jointAngleDeg ? "right" : "left";
 }
 
-/** The joint's limit and what sets it, as the analysis gives them (null before there is one). */
-export type JointLimit = Pick<AnalysisResult["drive"], "jointLimitDeg" | "jointLimitBy">;
-
-export function previewBinding(pose: CornerPose, layout: Layout, joint: JointLimit | null): PreviewBinding {
+export function previewBinding(pose: CornerPose, layout: Layout, analysis: AnalysisResult | null): PreviewBinding {
   for (const wheel of ["left", "right"] as const) if (!pose[wheel].steerSolved) return { kind: "tie-rod", wheel };
-  if (joint) {
+  if (analysis) {
     const wheel = worseWheel(pose);
     const angle = pose[wheel].jointAngleDeg;
-    const limit = joint.jointLimitDeg;
-    if (angle >= limit - 1e-9) return { kind: "joint", wheel, angleDeg: angle, limitDeg: limit, by: joint.jointLimitBy };
+    const limit = analysis.drive.jointLimitDeg;
+    if (angle >= limit - 1e-9) return { kind: "joint", wheel, angleDeg: angle, limitDeg: limit, by: analysis.drive.jointLimitBy };
   }
   if (Math.abs(Math.abs(pose.steerInput) - steerInputTravel(layout)) < 1e-9 && pose.steerInput !== 0) return { kind: "input-end", input: layout.topView.steeringInput.kind };
   return { kind: "none" };

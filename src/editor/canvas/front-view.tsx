@@ -1,5 +1,5 @@
 "use client";
-import { useMemo } from "react";
+import { useDeferredValue, useMemo } from "react";
 // The front view (y–z, seen from ahead), drawn from the shared scene (src/drawing/front-scene.ts): the same
 // drawing the SVG, DXF and dimension-sheet exports make.
 import { frontBox } from "@/drawing/corner-drawing";
@@ -9,7 +9,6 @@ import { previewBinding } from "@/drawing/preview-state";
 import { handlesOf } from "../document/handles";
 import { useEditor } from "../store/editor-context";
 import { SceneShapes } from "./scene-shapes";
-import { useJointLimit } from "./use-joint-limit";
 import { useShownPose } from "./use-shown-pose";
 import { ViewFrame } from "./view-frame";
 import { BindingNote, FaultNote } from "./view-notes";
@@ -21,10 +20,11 @@ export function FrontView() {
   const show = useEditor((s) => s.settings.show);
   const unit = useEditor((s) => s.settings.lengthUnit);
   const fault = useEditor((s) => s.live.fault);
-  const joint = useJointLimit();
+  // Low priority: during a drag the readouts paint first, the drawing's figures follow a frame later.
+  const analysis = useDeferredValue(useEditor((s) => s.live.analysis));
   const previewing = useEditor((s) => s.preview.steerInput !== 0 || s.preview.travelMm !== 0);
   const box = useMemo(() => frontBox(layout), [layout]);
-  const binding = pose ? previewBinding(pose, layout, joint) : null;
+  const binding = pose ? previewBinding(pose, layout, analysis) : null;
   const scene = frontScene({
     layout,
     pose,

@@ -1,25 +1,25 @@
 "use client";
 // The joint section: the neck in its cup at the articulation of the previewed pose (the wheel whose joint
 // bends more), drawn from the shared scene (src/drawing/joint-scene.ts), coloured by clearance.
-import { useMemo } from "react";
+import { useDeferredValue, useMemo } from "react";
 import { jointScene } from "@/drawing/joint-scene";
 import { worseWheel } from "@/drawing/preview-state";
 import { useEditor } from "../store/editor-context";
 import { SceneShapes } from "./scene-shapes";
-import { useJointLimit } from "./use-joint-limit";
 import { useShownPose } from "./use-shown-pose";
 import { ViewFrame } from "./view-frame";
 
 export function JointSectionView() {
   const { layout, pose } = useShownPose();
   const unit = useEditor((s) => s.settings.lengthUnit);
-  const joint = useJointLimit();
+  // Low priority: during a drag the readouts paint first, the drawing's figures follow a frame later.
+  const analysis = useDeferredValue(useEditor((s) => s.live.analysis));
   const showDimensions = useEditor((s) => s.settings.show.dimensions);
   const wheel = pose ? worseWheel(pose) : "left";
   const beta = pose ? pose[wheel].jointAngleDeg : 0;
   // The limit goes in by value: a new analysis with the same limit draws nothing new.
-  const limitDeg = joint?.jointLimitDeg ?? null;
-  const limitBy = joint?.jointLimitBy ?? null;
+  const limitDeg = analysis?.drive.jointLimitDeg ?? null;
+  const limitBy = analysis?.drive.jointLimitBy ?? null;
   const scene = useMemo(
     () => jointScene({ layout, betaDeg: beta, wheel, unit, showDimensions, limit: limitDeg !== null && limitBy ? { deg: limitDeg, by: limitBy } : null }),
     [layout, beta, wheel, unit, showDimensions, limitDeg, limitBy],

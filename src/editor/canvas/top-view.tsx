@@ -1,7 +1,7 @@
 "use client";
 // The top view (x–y, seen from above, in line with the front view; forward is down the screen): the rack or
 // the bellcranks, both wheels and the turning construction, drawn from the shared scene (src/drawing/top-scene.ts): the same drawing the exports make.
-import { useMemo } from "react";
+import { useDeferredValue, useMemo } from "react";
 import { topBox } from "@/drawing/corner-drawing";
 import { CLEARANCE_COLOUR, INK } from "@/drawing/drawing-colours";
 import { previewBinding } from "@/drawing/preview-state";
@@ -9,7 +9,6 @@ import { topScene } from "@/drawing/top-scene";
 import { handlesOf } from "../document/handles";
 import { useEditor } from "../store/editor-context";
 import { SceneShapes } from "./scene-shapes";
-import { useJointLimit } from "./use-joint-limit";
 import { useShownPose } from "./use-shown-pose";
 import { ViewFrame } from "./view-frame";
 import { BindingNote, FaultNote } from "./view-notes";
@@ -20,11 +19,12 @@ export function TopView() {
   const show = useEditor((s) => s.settings.show);
   const unit = useEditor((s) => s.settings.lengthUnit);
   const fault = useEditor((s) => s.live.fault);
-  const joint = useJointLimit();
+  // Low priority: during a drag the readouts paint first, the drawing's figures follow a frame later.
+  const analysis = useDeferredValue(useEditor((s) => s.live.analysis));
   const previewing = useEditor((s) => s.preview.steerInput !== 0 || s.preview.travelMm !== 0);
   const box = useMemo(() => topBox(layout), [layout]);
   const handles = useMemo(() => handlesOf("top", layout), [layout]);
-  const binding = pose ? previewBinding(pose, layout, joint) : null;
+  const binding = pose ? previewBinding(pose, layout, analysis) : null;
   const scene = topScene({
     layout,
     pose,

@@ -1,6 +1,6 @@
 "use client";
 // The corner at the previewed steer and travel, solved by the engine for the layout on screen.
-import { useDeferredValue, useMemo } from "react";
+import { useMemo } from "react";
 import type { Layout } from "@/contracts/layout";
 import { cornerPoseAt, cornerPoser, GeometryError, type CornerPose, type CornerPoser } from "@/engine";
 import { steerInputTravel } from "@/figures/steer-input";
@@ -23,17 +23,8 @@ function poserOf(layout: Layout): { poser: CornerPoser | null; error: string | n
   }
 }
 
-/**
- * The layout the views draw: the one on screen, at low priority. While a handle is dragged the readouts
- * take each move first and paint in that frame; the drawings follow in the next task (skipping moves
- * they could not keep up with), so a heavy drawing never holds the figures back.
- */
-export function useDrawnLayout(): Layout {
-  return useDeferredValue(useEditor(selectShownLayout));
-}
-
 export function useShownPose(): ShownPose {
-  const layout = useDrawnLayout();
+  const layout = useEditor(selectShownLayout);
   const input = useEditor((s) => s.preview.steerInput);
   const travel = useEditor((s) => s.preview.travelMm);
   const prepared = useMemo(() => poserOf(layout), [layout]);

@@ -8,6 +8,7 @@ import { Circle, Image as KonvaImage, Layer, Line, Stage } from "react-konva";
 import { movedPlacement, type UnderlayPlacement } from "@/contracts/underlays";
 import { nudgeHandle } from "../commands/edit-commands";
 import { handlePlanePoint, type HandleDef } from "../document/handles";
+import { selectShownLayout } from "../store/editor-store";
 import { useEditor, useEditorStore } from "../store/editor-context";
 import { createHandleDragTool, type PointerInput } from "../tools/handle-drag-tool";
 import { nudgeDelta } from "../tools/snapping";
@@ -19,7 +20,6 @@ import { pictureAttrs, pictureToScreen, screenToPicture } from "../underlay/unde
 import { formatLength } from "@/figures/length-unit";
 import { INK } from "@/drawing/drawing-colours";
 import { GridShape } from "./grid-shape";
-import { useDrawnLayout } from "./use-shown-pose";
 import { useElementSize } from "./use-element-size";
 import { fitBox, panBy, planeToScreen, scaleBarMm, screenToPlane, zoomAt, type PlaneBox, type PlanePoint, type ScreenPoint, type ViewTransform } from "@/drawing/view-transform";
 
@@ -44,7 +44,7 @@ export interface ViewFrameProps {
 
 export function ViewFrame({ id, title, axes, box, handles = [], children, notes }: ViewFrameProps) {
   const store = useEditorStore();
-  const layout = useDrawnLayout();
+  const layout = useEditor(selectShownLayout);
   const selected = useEditor((s) => s.selectedHandle);
   const faultHandle = useEditor((s) => s.live.fault?.handleId ?? null);
   const readOnly = useEditor((s) => s.readOnly);
@@ -55,9 +55,7 @@ export function ViewFrame({ id, title, axes, box, handles = [], children, notes 
   // Until the user zooms or pans, the view frames the layout as first shown, at whatever size it has.
   const [userT, setUserT] = useState<ViewTransform | null>(null);
   const [firstBox] = useState(box);
-  // Kept as one object while nothing moves the view, so the grid's layer is not redrawn on every render.
-  const fitted = useMemo(() => (size.width > 0 && size.height > 0 ? fitBox(firstBox, size.width, size.height, 28) : null), [firstBox, size.width, size.height]);
-  const t = userT ?? fitted;
+  const t = userT ?? (size.width > 0 && size.height > 0 ? fitBox(firstBox, size.width, size.height, 28) : null);
   const tRef = useRef(t);
   useEffect(() => {
     tRef.current = t;
@@ -186,10 +184,6 @@ export function ViewFrame({ id, title, axes, box, handles = [], children, notes 
   };
   const onPointerMove = (e: React.PointerEvent) => {
     if (!t) return;
-    // A gesture of this view owns the move: the panel group's document listener (on the same node as
-    // React's, so only a prevented default reaches it) would otherwise measure every resize handle, a
-    // forced layout of the page, on each move of a drag.
-    if (moveDrag.current || pan.current || tool.state().kind !== "idle") e.preventDefault();
     const p = input(e, t);
     if (moveDrag.current && uView && underlays) {
       const m = moveDrag.current;
@@ -271,13 +265,12 @@ export function ViewFrame({ id, title, axes, box, handles = [], children, notes 
       >
         {t && size.width > 0 ? (
           <Stage width={size.width} height={size.height} listening={false}>
-            {/* The picture and the grid on a layer of their own: a drag redraws only the drawing's layer. */}
             <Layer listening={false}>
               {picture?.visible && picture.image ? <UnderlayPicture image={picture.image} attrs={pictureAttrs(picture.placement, t)} opacity={picture.opacity} /> : null}
               <GridShape t={t} width={size.width} height={size.height} stepMm={gridStepMm} />
+              {children(t, size)}
             </Layer>
             <Layer listening={false}>
-              {children(t, size)}
               {picking && picture
                 ? picking.points.map((pt, i) => {
                     const [x, y] = pictureToScreen(picture.placement, t, pt);

@@ -7,7 +7,6 @@ import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { saveAsNewKit } from "../save/save-actions";
 import { useEditor, useEditorStore } from "../store/editor-context";
-import { selectDirty } from "../store/editor-store";
 
 export interface SearchResultOrigin {
   readonly searchId: string;
@@ -22,7 +21,7 @@ export function SearchResultBanner({ origin }: { origin: SearchResultOrigin | nu
   const store = useEditorStore();
   const router = useRouter();
   const kit = useEditor((s) => s.kit);
-  const unsaved = useEditor(selectDirty);
+  const unsaved = useEditor((s) => JSON.stringify(s.layout) !== s.savedJson);
   const [busy, setBusy] = useState(false);
   if (!origin) return null;
   return (

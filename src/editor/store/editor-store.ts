@@ -213,18 +213,8 @@ export function createEditorStore(init: EditorInit): EditorStore {
 /** The layout on screen: the draft while dragging, else the document. */
 export const selectShownLayout = (s: EditorState): Layout => s.draft ?? s.layout;
 
-// Documents are never changed in place, so one answer per document and saved text holds: the selector runs
-// on every store change (each pointer move of a drag) for every reader, and the text is worth making once.
-const dirtyOf = new WeakMap<Layout, { readonly savedJson: string; readonly dirty: boolean }>();
-
 /** True when the document differs from what was last loaded or saved. */
-export const selectDirty = (s: EditorState): boolean => {
-  const known = dirtyOf.get(s.layout);
-  if (known && known.savedJson === s.savedJson) return known.dirty;
-  const dirty = JSON.stringify(s.layout) !== s.savedJson;
-  dirtyOf.set(s.layout, { savedJson: s.savedJson, dirty });
-  return dirty;
-};
+export const selectDirty = (s: EditorState): boolean => JSON.stringify(s.layout) !== s.savedJson;
 
 /** True when the document is the thing to fault: the server would refuse it, so Save waits for a fix. */
 export const selectFaulty = (s: EditorState): boolean => s.live.fault !== null && s.draft === null;
