@@ -43,6 +43,20 @@ export function snapshot(term: Terminal, pgPort: number): Started {
   return { processes: [...descendants(term.pid, procs), ...pg], pgDataDir: dataDirOf(pg[0]!) };
 }
 
+/**
+ * A snapshot once `ready` holds for it (or the last one after `ms`): a runner prints its line right after
+ * forking a worker, which may not have exec'd its program yet when the line arrives.
+ */
+export async function snapshotWhen(term: Terminal, pgPort: number, ready: (s: Started) => boolean, ms = 10_000): Promise<Started> {
+  const until = Date.now() + ms;
+  let s = snapshot(term, pgPort);
+  while (!ready(s) && Date.now() < until) {
+    await new Promise((r) => setTimeout(r, 100));
+    s = snapshot(term, pgPort);
+  }
+  return s;
+}
+
 const describe = (procs: Proc[]) => procs.map((p) => `${p.pid} ${p.args}`);
 
 /**
